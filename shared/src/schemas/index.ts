@@ -1,0 +1,5 @@
+export * from './api-error.js';
+export * from './roles.js';
+export * from './auth.js';
+export * from './process.js';
+export * from './compute.js';
