@@ -1,0 +1,15 @@
+import { Injectable } from '@nestjs/common';
+import { ThrottlerGuard } from '@nestjs/throttler';
+
+/**
+ * Counts sign-in attempts per e-mail address (lower-cased, as accounts are stored), not per client,
+ * so guessing one account's password is slowed wherever the guesses come from.
+ */
+@Injectable()
+export class LoginThrottlerGuard extends ThrottlerGuard {
+  protected override async getTracker(request: Record<string, any>): Promise<string> {
+    const email: unknown = request.body?.email;
+    if (typeof email === 'string' && email.trim() !== '') return `email:${email.trim().toLowerCase()}`;
+    return `ip:${request.ip}`;
+  }
+}

@@ -1,0 +1,6 @@
+/** What an access token carries: the user's id. Everything else is read fresh from the database. */
+export interface JwtPayload {
+  sub: string;
+  iat?: number;
+  exp?: number;
+}

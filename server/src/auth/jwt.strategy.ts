@@ -1,0 +1,34 @@
+import { Injectable } from '@nestjs/common';
+import { PassportStrategy } from '@nestjs/passport';
+import { ExtractJwt, Strategy } from 'passport-jwt';
+import { unauthorized } from '../common/errors/domain-error.js';
+import { AppConfigService } from '../config/app-config.service.js';
+import type { UserEntity } from '../users/user.entity.js';
+import { UsersService } from '../users/users.service.js';
+import type { JwtPayload } from './jwt-payload.js';
+
+/**
+ * Checks the Bearer token's signature and expiry, then loads its user on every request: a user
+ * disabled (or deleted) after the token was issued is refused at once, not when the token expires.
+ */
+@Injectable()
+export class JwtStrategy extends PassportStrategy(Strategy) {
+  constructor(
+    config: AppConfigService,
+    private readonly users: UsersService,
+  ) {
+    super({
+      jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
+      secretOrKey: config.jwtSecret,
+      algorithms: ['HS256'],
+      ignoreExpiration: false,
+    });
+  }
+
+  async validate(payload: JwtPayload): Promise<UserEntity> {
+    const user = typeof payload.sub === 'string' ? await this.users.findById(payload.sub) : null;
+    if (!user) throw unauthorized('UNAUTHENTICATED', 'This account no longer exists; sign in again');
+    if (user.disabled) throw unauthorized('ACCOUNT_DISABLED', 'This account has been disabled by an admin');
+    return user;
+  }
+}

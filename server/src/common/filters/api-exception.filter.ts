@@ -1,0 +1,81 @@
+import type { ApiErrorBody, CommonErrorCode } from '@channelwright/shared/schemas';
+import { isEngineError } from '@channelwright/shared/device';
+import { Catch, HttpException, Logger, type ArgumentsHost, type ExceptionFilter } from '@nestjs/common';
+import type { Response } from 'express';
+import { ZodError } from 'zod';
+import { DomainError } from '../errors/domain-error.js';
+import { validationError } from '../validation/zod-issues.js';
+
+/** Codes for the HTTP exceptions Nest and its add-ons raise themselves (our own code throws DomainError). */
+const CODE_BY_STATUS: Partial<Record<number, CommonErrorCode>> = {
+  400: 'VALIDATION_FAILED',
+  401: 'UNAUTHENTICATED',
+  403: 'FORBIDDEN',
+  // Features answer a missing resource with a DomainError, so a bare 404 is Nest's "no such route".
+  404: 'ROUTE_NOT_FOUND',
+  409: 'CONFLICT',
+  413: 'PAYLOAD_TOO_LARGE',
+  429: 'TOO_MANY_REQUESTS',
+};
+
+const MESSAGE_BY_STATUS: Partial<Record<number, string>> = {
+  401: 'Sign in to continue',
+  413: 'The request body is larger than the server accepts',
+  429: 'Too many attempts; wait a minute and try again',
+};
+
+const INTERNAL_ERROR: ApiErrorBody = {
+  statusCode: 500,
+  code: 'INTERNAL_ERROR',
+  message: 'Something went wrong on the server; the error has been logged',
+};
+
+/** Every failure, of any kind, as the one error body of the API. Never exposes a stack or an internal message. */
+export function toApiErrorBody(exception: unknown): ApiErrorBody {
+  if (exception instanceof DomainError) {
+    return withoutUndefined({
+      statusCode: exception.status,
+      code: exception.code,
+      message: exception.message,
+      field: exception.field,
+      problems: exception.problems,
+    });
+  }
+  if (isEngineError(exception)) {
+    return withoutUndefined({ statusCode: 400, code: exception.code, message: exception.message, field: exception.field });
+  }
+  if (exception instanceof ZodError) return toApiErrorBody(validationError(exception));
+  if (exception instanceof HttpException) {
+    const status = exception.getStatus();
+    if (status >= 500) return INTERNAL_ERROR;
+    return {
+      statusCode: status,
+      code: CODE_BY_STATUS[status] ?? `HTTP_${status}`,
+      message: MESSAGE_BY_STATUS[status] ?? exception.message,
+    };
+  }
+  return INTERNAL_ERROR;
+}
+
+/** The one exception filter: maps DomainError, EngineError, zod and HTTP errors; logs server faults. */
+@Catch()
+export class ApiExceptionFilter implements ExceptionFilter {
+  private readonly logger = new Logger('ApiExceptionFilter');
+
+  catch(exception: unknown, host: ArgumentsHost): void {
+    const body = toApiErrorBody(exception);
+    if (body.statusCode >= 500) {
+      this.logger.error(exception instanceof Error ? (exception.stack ?? exception.message) : String(exception));
+    }
+    const response = host.switchToHttp().getResponse<Response>();
+    if (response.headersSent) {
+      response.end();
+      return;
+    }
+    response.status(body.statusCode).json(body);
+  }
+}
+
+function withoutUndefined(body: ApiErrorBody): ApiErrorBody {
+  return Object.fromEntries(Object.entries(body).filter(([, value]) => value !== undefined)) as ApiErrorBody;
+}

@@ -1,0 +1,22 @@
+export const NODE_ENVS = ['development', 'production', 'test'] as const;
+export type NodeEnv = (typeof NODE_ENVS)[number];
+
+/** The server's configuration, parsed and checked from the environment once at start-up. */
+export interface AppConfig {
+  nodeEnv: NodeEnv;
+  port: number;
+  /** Absolute folder for the SQLite database and every other file the server writes. */
+  dataDir: string;
+  jwtSecret: string;
+  jwtTtlSeconds: number;
+  /** Outgoing mail server; unset means the server runs its own local mail sink. */
+  smtpUrl?: string;
+  signupEnabled: boolean;
+  seedDemo: boolean;
+  /** Base of links in e-mails. */
+  appUrl: string;
+  /** Absolute folder of the built client that the server serves. */
+  clientDist: string;
+  /** Origins allowed by CORS; empty means CORS stays closed (same origin only). */
+  corsOrigins: string[];
+}

@@ -1,0 +1,27 @@
+import { mkdirSync } from 'node:fs';
+import { join } from 'node:path';
+import type { DataSourceOptions } from 'typeorm';
+import { MIGRATIONS } from './migrations/index.js';
+
+type SqliteDataSourceOptions = Extract<DataSourceOptions, { type: 'better-sqlite3' }>;
+
+export const DATABASE_FILE_NAME = 'channelwright.sqlite';
+
+/** How long a statement waits for a lock held by another connection before failing with SQLITE_BUSY. */
+const BUSY_TIMEOUT_MS = 5000;
+
+/**
+ * The SQLite database in DATA_DIR: WAL journal (readers do not block the writer), foreign keys on
+ * (the driver sets them on every connection), a busy timeout, and the checked-in migrations.
+ */
+export function dataSourceOptions(dataDir: string): SqliteDataSourceOptions {
+  mkdirSync(dataDir, { recursive: true });
+  return {
+    type: 'better-sqlite3',
+    database: join(dataDir, DATABASE_FILE_NAME),
+    enableWAL: true,
+    timeout: BUSY_TIMEOUT_MS,
+    migrations: MIGRATIONS,
+    synchronize: false,
+  };
+}
