@@ -1,0 +1,16 @@
+import { PageHeader } from '../../../components/page-header';
+import { useSignedInUser } from '../../../lib/session/current-user';
+import { ProjectsPlaceholder } from '../components/projects-placeholder';
+
+export default function HomeRoute() {
+  const user = useSignedInUser();
+  return (
+    <>
+      <PageHeader
+        title={`Welcome, ${user.displayName}`}
+        description="Your sizing work, its reviews and sign-offs start here."
+      />
+      <ProjectsPlaceholder />
+    </>
+  );
+}

@@ -1,0 +1,108 @@
+import type { GlobalRole, User } from '@channelwright/shared/schemas';
+import { Badge, Group, Select, Switch, Table, Text, Tooltip } from '@mantine/core';
+import type { UpdateUserInput } from '../api/update-user';
+
+interface UsersTableProps {
+  users: User[];
+  /** The administrator looking at the table, who may not lock themselves out. */
+  currentUserId: string;
+  onChange: (input: UpdateUserInput) => void;
+  /** The user whose change is on its way to the server, if any. */
+  pendingUserId?: string;
+}
+
+const ROLE_OPTIONS: { value: GlobalRole; label: string }[] = [
+  { value: 'member', label: 'Member' },
+  { value: 'admin', label: 'Administrator' },
+];
+
+const dateFormat = new Intl.DateTimeFormat('en-GB', { year: 'numeric', month: 'short', day: 'numeric' });
+
+function SelfGuard({ isSelf, children }: { isSelf: boolean; children: React.ReactElement }) {
+  if (!isSelf) return children;
+  return (
+    <Tooltip label="You cannot change your own role or access">
+      <span>{children}</span>
+    </Tooltip>
+  );
+}
+
+/** Every account with its role, its access and whether it maintains the process library. */
+export function UsersTable({ users, currentUserId, onChange, pendingUserId }: UsersTableProps) {
+  const rows = users.map((user) => {
+    const isSelf = user.id === currentUserId;
+    const busy = pendingUserId === user.id;
+    return (
+      <Table.Tr key={user.id}>
+        <Table.Td>
+          <Group gap={6} wrap="nowrap">
+            <Text size="sm" fw={500}>
+              {user.displayName}
+            </Text>
+            {isSelf && (
+              <Badge size="xs" variant="light">
+                you
+              </Badge>
+            )}
+          </Group>
+          <Text size="xs" c="dimmed">
+            {user.email}
+          </Text>
+        </Table.Td>
+        <Table.Td w={180}>
+          <SelfGuard isSelf={isSelf}>
+            <Select
+              aria-label={`Role of ${user.displayName}`}
+              data={ROLE_OPTIONS}
+              value={user.role}
+              allowDeselect={false}
+              disabled={isSelf || busy}
+              size="xs"
+              onChange={(role) => role && onChange({ id: user.id, changes: { role: role as GlobalRole } })}
+            />
+          </SelfGuard>
+        </Table.Td>
+        <Table.Td>
+          <Switch
+            aria-label={`${user.displayName} maintains process profiles`}
+            checked={user.processMaintainer}
+            disabled={busy}
+            onChange={(event) => onChange({ id: user.id, changes: { processMaintainer: event.currentTarget.checked } })}
+          />
+        </Table.Td>
+        <Table.Td>
+          <SelfGuard isSelf={isSelf}>
+            <Switch
+              aria-label={`${user.displayName} may sign in`}
+              checked={!user.disabled}
+              disabled={isSelf || busy}
+              onChange={(event) => onChange({ id: user.id, changes: { disabled: !event.currentTarget.checked } })}
+            />
+          </SelfGuard>
+        </Table.Td>
+        <Table.Td>
+          <Text size="sm" c="dimmed">
+            {dateFormat.format(new Date(user.createdAt))}
+          </Text>
+        </Table.Td>
+      </Table.Tr>
+    );
+  });
+
+  return (
+    <Table.ScrollContainer minWidth={720}>
+      <Table verticalSpacing="sm" highlightOnHover aria-label="Users">
+        <Table.Thead>
+          <Table.Tr>
+            <Table.Th>Name</Table.Th>
+            <Table.Th>Role</Table.Th>
+            <Table.Th>Process maintainer</Table.Th>
+            <Table.Th>May sign in</Table.Th>
+            <Table.Th>Joined</Table.Th>
+          </Table.Tr>
+        </Table.Thead>
+        <Table.Tbody>{rows}</Table.Tbody>
+      </Table>
+    </Table.ScrollContainer>
+  );
+}
