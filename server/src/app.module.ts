@@ -1,5 +1,6 @@
 import { Module, type DynamicModule } from '@nestjs/common';
 import { AuthModule } from './auth/auth.module.js';
+import { ComputeModule } from './compute/compute.module.js';
 import { serveClient } from './common/static/serve-client.js';
 import type { AppConfig } from './config/app-config.js';
 import { ConfigModule } from './config/config.module.js';
@@ -20,6 +21,7 @@ export class AppModule {
         UsersModule,
         AuthModule,
         HealthModule,
+        ComputeModule,
         SeedModule,
         ...serveClient(config.clientDist),
       ],

@@ -1,2 +1,200 @@
-// Owned by the engine work: zod schema of a process (parameters per polarity, corners).
-export {};
+import { z } from 'zod';
+
+/**
+ * A process: per-polarity MOS parameters at the nominal temperature, corners and optional device
+ * flavours. Every voltage is polarity-normalised: for PMOS the engine works with VSG, VSD, VBS and
+ * vt = −VTP, so an enhancement device of either polarity has vt0 > 0 and a depletion-mode device
+ * vt0 < 0. All values in SI units (m, V, A, F), temperatures in °C.
+ */
+
+export interface ParameterInfo {
+  /** The field name in the process JSON and the CSV import. */
+  readonly name: string;
+  /** The symbol a designer reads, e.g. "VT0". */
+  readonly symbol: string;
+  /** SI unit of the stored number; parseQuantity(text, unit) reads a typed value into it. */
+  readonly unit: string;
+  /** The unit the editor shows, e.g. "µA/V²" for kp; the number stored is still in `unit`. */
+  readonly displayUnit: string;
+  readonly description: string;
+  /** Plausible range, inclusive, in `unit`: the schema refuses values outside it. */
+  readonly min: number;
+  readonly max: number;
+  /** When true, the value must be strictly above min (a positive quantity). */
+  readonly exclusiveMin?: boolean;
+  readonly optional: boolean;
+}
+
+const p = (info: Omit<ParameterInfo, 'optional'> & { optional?: boolean }): ParameterInfo => ({ optional: false, ...info });
+
+/** Every per-polarity device parameter, in the order the editor and the CSV list them. */
+export const DEVICE_PARAMETERS = [
+  p({ name: 'vt0', symbol: 'VT0', unit: 'V', displayUnit: 'V', min: -1, max: 1.5, description: 'Threshold voltage at VSB = 0 and tnom, polarity-normalised (−VTP for PMOS): > 0 enhancement, < 0 depletion mode' }),
+  p({ name: 'kp', symbol: 'KP', unit: 'A/V²', displayUnit: 'µA/V²', min: 10e-6, max: 2e-3, description: 'Transconductance parameter µ0·Cox at tnom' }),
+  p({ name: 'gamma', symbol: 'γ', unit: '√V', displayUnit: '√V', min: 0, max: 1.5, description: 'Body-effect coefficient √(2·q·εSi·NA)/Cox' }),
+  p({ name: 'twoPhiF', symbol: '2φF', unit: 'V', displayUnit: 'V', min: 0.3, max: 1.2, description: 'Surface potential in strong inversion, 2·UT·ln(NA/ni)' }),
+  p({ name: 'lambda', symbol: 'λ', unit: '1/V', displayUnit: '1/V', min: 0, max: 1, description: 'Channel-length modulation; with lRef, the value at L = lRef (λ(L) = lambda·lRef/L)' }),
+  p({ name: 'lRef', symbol: 'Lref', unit: 'm', displayUnit: 'µm', min: 10e-9, max: 100e-6, exclusiveMin: true, optional: true, description: 'Length at which lambda was measured; when given, λ scales as 1/L' }),
+  p({ name: 'n', symbol: 'n', unit: '', displayUnit: '', min: 1, max: 3, optional: true, description: 'Subthreshold slope factor; when absent, n = 1 + γ/(2·√(2φF + VSB))' }),
+  p({ name: 'tox', symbol: 'tox', unit: 'm', displayUnit: 'nm', min: 0.5e-9, max: 100e-9, description: 'Gate-oxide thickness (SiO2-equivalent)' }),
+  p({ name: 'cgdo', symbol: 'CGDO', unit: 'F/m', displayUnit: 'fF/µm', min: 0, max: 2e-9, description: 'Gate–drain (and gate–source) overlap capacitance per width' }),
+  p({ name: 'cj', symbol: 'CJ', unit: 'F/m²', displayUnit: 'fF/µm²', min: 0, max: 1e-2, description: 'Zero-bias junction capacitance per area of the source/drain diffusion' }),
+  p({ name: 'cjsw', symbol: 'CJSW', unit: 'F/m', displayUnit: 'fF/µm', min: 0, max: 1e-9, description: 'Zero-bias junction sidewall capacitance per perimeter' }),
+  p({ name: 'ldiff', symbol: 'Ldiff', unit: 'm', displayUnit: 'µm', min: 0, max: 10e-6, description: 'Length of the source/drain diffusion (area = W·ldiff)' }),
+  p({ name: 'vtTc', symbol: 'dVT/dT', unit: 'V/K', displayUnit: 'mV/K', min: -5e-3, max: 0, description: 'Temperature coefficient of the threshold (polarity-normalised; negative: VT falls when hotter)' }),
+  p({ name: 'muExp', symbol: 'µ exponent', unit: '', displayUnit: '', min: -3, max: 0, description: 'Mobility temperature exponent: kp ∝ (T/Tnom)^muExp, T in kelvin (about −1.5)' }),
+  p({ name: 'avt', symbol: 'AVT', unit: 'V·m', displayUnit: 'mV·µm', min: 0, max: 50e-9, description: 'Pelgrom threshold-matching coefficient: σ(ΔVT) of a pair = avt/√(W·L)' }),
+  p({ name: 'abeta', symbol: 'Aβ', unit: 'm', displayUnit: '%·µm', min: 0, max: 1e-7, description: 'Pelgrom current-factor matching coefficient: σ(Δβ/β) of a pair = abeta/√(W·L)' }),
+  p({ name: 'lmin', symbol: 'Lmin', unit: 'm', displayUnit: 'µm', min: 10e-9, max: 20e-6, description: 'Minimum drawn gate length' }),
+  p({ name: 'wmin', symbol: 'Wmin', unit: 'm', displayUnit: 'µm', min: 10e-9, max: 100e-6, description: 'Minimum drawn width of one finger' }),
+  p({ name: 'wgrid', symbol: 'W grid', unit: 'm', displayUnit: 'nm', min: 0.1e-9, max: 1e-6, description: 'Drawing grid the width of a finger snaps to' }),
+  p({ name: 'jg', symbol: 'JG', unit: 'A/m²', displayUnit: 'A/m²', min: 0, max: 1e6, optional: true, description: 'Gate-leakage current density at vdd (gate current = jg·W·L); taken as given, no temperature law' }),
+  p({ name: 'js', symbol: 'JS', unit: 'A/m²', displayUnit: 'fA/µm²', min: 0, max: 10, optional: true, description: 'Drain-junction leakage density at vdd (current = js·W·ldiff); taken as given, no temperature law' }),
+] as const satisfies readonly ParameterInfo[];
+
+/** Process-level fields and corner shifts, for the editor and the CSV import. */
+export const PROCESS_FIELDS = [
+  p({ name: 'tnom', symbol: 'Tnom', unit: '°C', displayUnit: '°C', min: -60, max: 200, description: 'Temperature at which the parameters were extracted' }),
+  p({ name: 'vdd', symbol: 'VDD', unit: 'V', displayUnit: 'V', min: 0.3, max: 20, description: 'Nominal supply voltage (off current is taken at VDS = vdd)' }),
+  p({ name: 'tempRange.min', symbol: 'Tmin', unit: '°C', displayUnit: '°C', min: -200, max: 300, optional: true, description: 'Lowest operating temperature' }),
+  p({ name: 'tempRange.max', symbol: 'Tmax', unit: '°C', displayUnit: '°C', min: -200, max: 300, optional: true, description: 'Highest operating temperature' }),
+  p({ name: 'dvt', symbol: 'ΔVT', unit: 'V', displayUnit: 'mV', min: -0.5, max: 0.5, description: 'Corner shift of the (polarity-normalised) threshold: > 0 slower' }),
+  p({ name: 'kpScale', symbol: 'KP ×', unit: '', displayUnit: '', min: 0.1, max: 10, exclusiveMin: true, description: 'Corner factor on kp: < 1 slower' }),
+] as const satisfies readonly ParameterInfo[];
+
+type DeviceParameterName = (typeof DEVICE_PARAMETERS)[number]['name'];
+
+/** Looks up the description of a parameter by name (device parameters and process fields). */
+export function parameterInfo(name: string): ParameterInfo | undefined {
+  return [...DEVICE_PARAMETERS, ...PROCESS_FIELDS].find((info) => info.name === name);
+}
+
+function boundedNumber(info: ParameterInfo) {
+  const unit = info.unit === '' ? '' : ` ${info.unit}`;
+  const range = `${info.min}${unit} … ${info.max}${unit}`;
+  const base = z
+    .number({ error: `${info.name} must be a number${info.unit ? ` in ${info.unit}` : ''}` })
+    .max(info.max, { error: `${info.name} must be in ${range}` });
+  const bounded = info.exclusiveMin
+    ? base.gt(info.min, { error: `${info.name} must be above ${info.min}${unit} (range ${range})` })
+    : base.min(info.min, { error: `${info.name} must be in ${range}` });
+  return bounded.describe(`${info.description} [${info.unit || '1'}], ${range}`);
+}
+
+function parameter(name: string) {
+  const info = parameterInfo(name);
+  if (!info) throw new Error(`no parameter ${name}`);
+  return boundedNumber(info);
+}
+
+const device = (name: DeviceParameterName) => parameter(name);
+
+/** One polarity's parameters at tnom (polarity-normalised). */
+export const deviceParamsSchema = z
+  .strictObject({
+    vt0: device('vt0'),
+    kp: device('kp'),
+    gamma: device('gamma'),
+    twoPhiF: device('twoPhiF'),
+    lambda: device('lambda'),
+    lRef: device('lRef').optional(),
+    n: device('n').optional(),
+    tox: device('tox'),
+    cgdo: device('cgdo'),
+    cj: device('cj'),
+    cjsw: device('cjsw'),
+    ldiff: device('ldiff'),
+    vtTc: device('vtTc'),
+    muExp: device('muExp'),
+    avt: device('avt'),
+    abeta: device('abeta'),
+    lmin: device('lmin'),
+    wmin: device('wmin'),
+    wgrid: device('wgrid'),
+    jg: device('jg').optional(),
+    js: device('js').optional(),
+  })
+  .superRefine((params, ctx) => {
+    if (params.wgrid > params.wmin) {
+      ctx.addIssue({ code: 'custom', path: ['wgrid'], message: `wgrid (${params.wgrid} m) must not exceed wmin (${params.wmin} m)` });
+    }
+  })
+  .describe('MOS parameters of one polarity at tnom; voltages polarity-normalised (PMOS: VSG, VSD, VBS, vt = −VTP)');
+export type DeviceParams = z.infer<typeof deviceParamsSchema>;
+
+export const polaritySchema = z
+  .enum(['nmos', 'pmos'], { error: 'polarity must be "nmos" or "pmos"' })
+  .describe('nmos or pmos; PMOS voltages are polarity-normalised (VSG, VSD, VBS; vt = −VTP)');
+export type Polarity = z.infer<typeof polaritySchema>;
+
+export const cornerShiftSchema = z.strictObject({
+  dvt: parameter('dvt'),
+  kpScale: parameter('kpScale'),
+});
+export type CornerShift = z.infer<typeof cornerShiftSchema>;
+
+const nameSchema = (what: string) =>
+  z
+    .string({ error: `${what} must be text` })
+    .trim()
+    .min(1, `${what} must not be empty`)
+    .max(50, `${what} must have at most 50 characters`);
+
+/** A process corner: a VT shift and a kp factor per polarity. "TT" always means the nominal parameters. */
+export const cornerSchema = z.strictObject({
+  name: nameSchema('Corner name'),
+  nmos: cornerShiftSchema,
+  pmos: cornerShiftSchema,
+});
+export type Corner = z.infer<typeof cornerSchema>;
+
+/** A device flavour, e.g. a native (depletion-mode) NMOS: its own full parameter set; corners apply by polarity. */
+export const flavourSchema = z.strictObject({
+  name: nameSchema('Flavour name'),
+  polarity: polaritySchema,
+  description: z.string().max(500).optional(),
+  params: deviceParamsSchema,
+});
+export type Flavour = z.infer<typeof flavourSchema>;
+
+const temperature = (name: 'tempRange.min' | 'tempRange.max' | 'tnom') => parameter(name);
+
+export const processSchema = z
+  .strictObject({
+    name: z.string({ error: 'Process name must be text' }).trim().min(1, 'Process name must not be empty').max(100),
+    description: z.string().max(2000).optional(),
+    tnom: temperature('tnom'),
+    vdd: parameter('vdd'),
+    tempRange: z.strictObject({ min: temperature('tempRange.min'), max: temperature('tempRange.max') }).optional(),
+    nmos: deviceParamsSchema,
+    pmos: deviceParamsSchema,
+    corners: z.array(cornerSchema).max(20, 'At most 20 corners'),
+    flavours: z.array(flavourSchema).max(20, 'At most 20 flavours').optional(),
+  })
+  .superRefine((process, ctx) => {
+    if (process.tempRange && process.tempRange.min >= process.tempRange.max) {
+      ctx.addIssue({ code: 'custom', path: ['tempRange', 'max'], message: 'tempRange.max must be above tempRange.min' });
+    }
+    const seen = new Set<string>();
+    process.corners.forEach((corner, index) => {
+      if (seen.has(corner.name)) ctx.addIssue({ code: 'custom', path: ['corners', index, 'name'], message: `Corner ${corner.name} is listed twice` });
+      seen.add(corner.name);
+      if (corner.name !== 'TT') return;
+      for (const polarity of ['nmos', 'pmos'] as const) {
+        if (corner[polarity].dvt !== 0) ctx.addIssue({ code: 'custom', path: ['corners', index, polarity, 'dvt'], message: 'TT means the nominal parameters: its dvt must be 0' });
+        if (corner[polarity].kpScale !== 1) ctx.addIssue({ code: 'custom', path: ['corners', index, polarity, 'kpScale'], message: 'TT means the nominal parameters: its kpScale must be 1' });
+      }
+    });
+    const flavours = new Set<string>();
+    process.flavours?.forEach((flavour, index) => {
+      if (flavours.has(flavour.name)) ctx.addIssue({ code: 'custom', path: ['flavours', index, 'name'], message: `Flavour ${flavour.name} is listed twice` });
+      flavours.add(flavour.name);
+    });
+  })
+  .describe('A process: parameters per polarity at tnom (°C), supply vdd, corners and optional flavours');
+export type Process = z.infer<typeof processSchema>;
+
+/** The corner names a process answers to: "TT" first, then the listed ones. */
+export function cornerNames(process: Pick<Process, 'corners'>): string[] {
+  return ['TT', ...process.corners.map((c) => c.name).filter((name) => name !== 'TT')];
+}

@@ -1,0 +1,125 @@
+import {
+  type CornersRequestInput,
+  type CornersResponse,
+  type SizeRequestInput,
+  type SizeResponse,
+  type SweepPoint,
+  type SweepRequestInput,
+  type SweepResponse,
+  checkRequestAgainstProcess,
+  cornersRequestSchema,
+  fieldOfIssue,
+  parseOrThrow,
+  sizeRequestSchema,
+  sweepRequestSchema,
+} from '../schemas/compute.js';
+import { type Polarity, type Process, processSchema } from '../schemas/process.js';
+import { cornerAnalysis } from './corners.js';
+import type { CurrentModel } from './drain-current.js';
+import { ENGINE_VERSION } from './engine-version.js';
+import { EngineError, isEngineError } from './errors.js';
+import { prepareDevice } from './resolve-device.js';
+import { regionOf } from './small-signal.js';
+import { type Sizing, solveSize } from './solve.js';
+import { type SweepColumns, sweep } from './sweep.js';
+import { zeroTemperatureCoefficientVgs } from './zero-temperature-coefficient.js';
+
+/**
+ * The three functions the server's compute controller calls. Each parses the request with its schema
+ * (EngineError VALIDATION_FAILED with the field), takes the process given (a stored profile the server
+ * resolved from processId) or else the request's inline process, checks the request against it, and
+ * answers the response shape of schemas/compute.ts. Errors are EngineErrors with a code and a field.
+ */
+
+function resolveProcess(inline: Process | undefined, given: Process | undefined): Process {
+  if (given !== undefined) {
+    const result = processSchema.safeParse(given);
+    if (!result.success) {
+      const issue = result.error.issues[0];
+      throw new EngineError('PROCESS_INVALID', `The stored process is not valid: ${issue.message}`, `process.${fieldOfIssue(issue) ?? ''}`.replace(/\.$/, ''));
+    }
+    return result.data;
+  }
+  if (inline === undefined) throw new EngineError('PROCESS_REQUIRED', 'No process: give an inline process, or resolve processId before computing', 'processId');
+  return inline;
+}
+
+function context(polarity: Polarity, flavour: string | undefined, model: CurrentModel) {
+  return { engineVersion: ENGINE_VERSION, polarity, ...(flavour === undefined ? {} : { flavour }), model };
+}
+
+function sizeResponse(process: Process, sizing: Sizing, polarity: Polarity, flavour: string | undefined, model: CurrentModel, corner: string, temperature: number): SizeResponse {
+  return { ...sizing, ...context(polarity, flavour, model), corner, temperature, ztcVgs: ztcVgsOf(process, sizing, polarity, flavour, model, corner, temperature) };
+}
+
+function ztcVgsOf(process: Process, sizing: Sizing, polarity: Polarity, flavour: string | undefined, model: CurrentModel, corner: string, temperature: number): number | null {
+  try {
+    return zeroTemperatureCoefficientVgs(process, { polarity, flavour, corner, model, w: sizing.w, l: sizing.l, vds: sizing.vds, vsb: sizing.vsb }, temperature).vgs;
+  } catch (error) {
+    if (isEngineError(error)) return null;
+    throw error;
+  }
+}
+
+/** POST /api/compute/size. */
+export function computeSize(request: SizeRequestInput, process?: Process): SizeResponse {
+  const parsed = parseOrThrow(sizeRequestSchema, request);
+  const resolved = resolveProcess(parsed.process, process);
+  checkRequestAgainstProcess(parsed, resolved);
+  const device = prepareDevice(resolved, parsed.polarity, { corner: parsed.corner, temperature: parsed.temperature, flavour: parsed.flavour });
+  return sizeResponse(resolved, solveSize(device, parsed.model, parsed), parsed.polarity, parsed.flavour, parsed.model, device.corner, device.temperature);
+}
+
+/** POST /api/compute/sweep: the columnar sweep turned into points, NaN and infinities as null. */
+export function computeSweep(request: SweepRequestInput, process?: Process): SweepResponse {
+  const parsed = parseOrThrow(sweepRequestSchema, request);
+  const resolved = resolveProcess(parsed.process, process);
+  checkRequestAgainstProcess(parsed, resolved);
+  const result = sweep(parsed, resolved);
+  const base = sizeResponse(resolved, result.base, parsed.polarity, parsed.flavour, parsed.model, parsed.corner, parsed.temperature ?? resolved.tnom);
+  return {
+    ...context(parsed.polarity, parsed.flavour, parsed.model),
+    param: result.param,
+    hold: result.hold,
+    fields: [...result.fields],
+    base,
+    series: result.series.map((series) => ({ corner: series.corner, temperature: series.temperature, points: pointsOf(result, series), warnings: series.warnings })),
+  };
+}
+
+/** Points as objects, filled field by field (each pass stores one key: fast, and the same object shape for every point). */
+function pointsOf(result: SweepColumns, series: SweepColumns['series'][number]): SweepPoint[] {
+  const { param } = result;
+  const fields = result.fields.filter((field) => field !== param);
+  const { values, columns } = series;
+  const template: Record<string, null> = { [param]: null };
+  for (const field of fields) template[field] = null;
+  const points: Record<string, number | string | boolean | null>[] = new Array(values.length);
+  for (let i = 0; i < values.length; i++) points[i] = { ...template };
+  for (let i = 0; i < values.length; i++) points[i][param] = values[i];
+  for (const field of fields) {
+    if (field === 'region') {
+      const ic = columns.ic as Float64Array;
+      for (let i = 0; i < values.length; i++) points[i].region = Number.isFinite(ic[i]) ? regionOf(ic[i]) : null;
+    } else if (field === 'saturated') {
+      const saturated = columns.saturated as Float64Array;
+      for (let i = 0; i < values.length; i++) points[i].saturated = Number.isNaN(saturated[i]) ? null : saturated[i] === 1;
+    } else {
+      const column = columns[field] as Float64Array;
+      for (let i = 0; i < values.length; i++) {
+        const value = column[i];
+        points[i][field] = Number.isFinite(value) ? value : null;
+      }
+    }
+  }
+  return points as SweepPoint[];
+}
+
+/** POST /api/compute/corners. */
+export function computeCorners(request: CornersRequestInput, process?: Process): CornersResponse {
+  const parsed = parseOrThrow(cornersRequestSchema, request);
+  const resolved = resolveProcess(parsed.process, process);
+  checkRequestAgainstProcess(parsed, resolved);
+  const analysis = cornerAnalysis(parsed, resolved);
+  return { ...context(parsed.polarity, parsed.flavour, parsed.model), bias: parsed.bias, ...analysis };
+}

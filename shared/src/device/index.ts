@@ -1,0 +1,88 @@
+/**
+ * The device engine: pure functions of plain SI numbers (A, V, m, F, S, K inside, °C at the edges),
+ * polarity-normalised voltages (PMOS: VSG, VSD, VBS, vt = −VTP). Equations and sources: docs/model.md.
+ */
+export { ENGINE_VERSION } from './engine-version.js';
+export { EngineError, isEngineError } from './errors.js';
+
+// The three calls of the compute API (parse, check against the process, compute).
+export { computeSize, computeSweep, computeCorners } from './compute.js';
+
+// Devices of a process at a corner and temperature.
+export { type PreparedDevice, prepareDevice, deviceParamsOf, cornerShiftOf, thresholdAt } from './resolve-device.js';
+export { type Bias, type OperatingPoint, operatingPoint } from './operating-point.js';
+export { channelCurrentAt } from './channel-current.js';
+
+// Sizing, sweeps, corners.
+export { type SizeTarget, type Sizing, type Constraint, solveSize, MAX_WIDTH } from './solve.js';
+export { type SnappedWidth, snapWidth, DEFAULT_MAX_FINGER_WIDTH } from './snap-width.js';
+export { overdriveForCurrent, overdriveForGmId, gmIdLimit, MAX_OVERDRIVE } from './overdrive.js';
+export { type SweepColumns, type SweepSeriesColumns, sweep } from './sweep.js';
+export { sweepValues } from './sweep-values.js';
+export { type CornerPoint, type CornerAnalysis, cornerAnalysis, cornersOf, temperaturesOf } from './corners.js';
+
+// The equations, one concept each.
+export { thermalVoltage } from './thermal-voltage.js';
+export { type ThresholdParams, thresholdVoltage, bodyEffect, bodyEffectSlope } from './threshold.js';
+export { slopeFactor } from './slope-factor.js';
+export { kpAtTemperature } from './mobility.js';
+export { lambdaAtLength } from './channel-length-modulation.js';
+export {
+  type CurrentModel,
+  type KernelColumns,
+  allRegionColumns,
+  squareLawColumns,
+  drainCurrent,
+  drainCurrentInto,
+  allRegionCurrentInto,
+  squareLawCurrentInto,
+  ID,
+  GM,
+  GDS,
+  GM_ID,
+  VDSAT,
+  KERNEL_OUTPUTS,
+} from './drain-current.js';
+export {
+  type Region,
+  type SmallSignal,
+  smallSignal,
+  saturationVoltage,
+  inversionCoefficient,
+  regionOf,
+  WEAK_INVERSION_IC,
+  STRONG_INVERSION_IC,
+} from './small-signal.js';
+export {
+  type GateCapacitances,
+  oxideCapacitance,
+  gateCapacitances,
+  gateSourceCapacitance,
+  gateDrainCapacitance,
+  junctionCapacitance,
+  transitFrequency,
+} from './capacitance.js';
+export {
+  type MismatchDevice,
+  type PairMismatch,
+  type MatchGroupMismatch,
+  pairMismatch,
+  mismatchBetween,
+  matchGroupMismatch,
+  pelgromPairSigma,
+} from './mismatch.js';
+export { type Leakage, leakage } from './leakage.js';
+export { type ZtcDevice, type ZeroTemperatureCoefficient, zeroTemperatureCoefficientVgs } from './zero-temperature-coefficient.js';
+export { type ScalableDevice, scaleConstantField, dennardRatios } from './scaling.js';
+export {
+  type DeriveInputs,
+  type DerivedParameters,
+  deriveProcessParameters,
+  intrinsicCarrierDensity,
+  siliconBandgap,
+  INTRINSIC_CARRIER_DENSITY_300K,
+} from './derive-process.js';
+export { operatingPointWarnings, WARNING_THRESHOLDS } from './warnings.js';
+
+// Invented demo data for the seed and the docs.
+export { BF180G, BF130G, DEMO_PROCESSES, DEMO_DATA_NOTICE } from './demo-processes.js';

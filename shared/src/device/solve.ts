@@ -1,0 +1,117 @@
+import { lambdaAtLength } from './channel-length-modulation.js';
+import { type CurrentModel, drainCurrent } from './drain-current.js';
+import { EngineError } from './errors.js';
+import { type OperatingPoint, operatingPoint } from './operating-point.js';
+import { overdriveForCurrent, overdriveForGmId } from './overdrive.js';
+import { type PreparedDevice, thresholdAt } from './resolve-device.js';
+import { say } from './say.js';
+import { slopeFactor } from './slope-factor.js';
+import { DEFAULT_MAX_FINGER_WIDTH, snapWidth } from './snap-width.js';
+import type { Warning } from '../schemas/compute.js';
+import { operatingPointWarnings } from './warnings.js';
+
+/** Widths above this are refused as no circuit's, m (10 cm). */
+export const MAX_WIDTH = 0.1;
+
+/** What to size for: ID, L, VDS, VSB (SI, polarity-normalised) and exactly one of vov, gmId, w, vgs. */
+export interface SizeTarget {
+  id: number;
+  l: number;
+  vds: number;
+  vsb: number;
+  vov?: number;
+  gmId?: number;
+  w?: number;
+  vgs?: number;
+  /** Fingers are split so that none is wider, m; default 10 µm. */
+  maxFingerWidth?: number;
+}
+
+export type Constraint = 'vov' | 'gmId' | 'w' | 'vgs';
+
+export interface Sizing extends OperatingPoint {
+  fingers: number;
+  fingerWidth: number;
+  /** The width the target asked for before snapping, m. */
+  wRequired: number;
+  constraint: Constraint;
+  warnings: Warning[];
+}
+
+/** Which one of vov, gmId, w, vgs the target gives (the schemas make sure it is exactly one). */
+export function constraintOf(target: Pick<SizeTarget, Constraint>): Constraint {
+  const given = (['vov', 'gmId', 'w', 'vgs'] as const).filter((name) => target[name] !== undefined);
+  if (given.length !== 1) {
+    throw new EngineError('VALIDATION_FAILED', `Give exactly one of vov, gmId, w, vgs (got ${given.join(', ') || 'none'})`, given[1] ?? 'vov');
+  }
+  return given[0];
+}
+
+export function checkLength(device: PreparedDevice, l: number, field = 'l'): void {
+  if (l < device.params.lmin) {
+    throw new EngineError('L_BELOW_LMIN', `L = ${say(l, 'm')} is below the process minimum lmin = ${say(device.params.lmin, 'm')}`, field);
+  }
+}
+
+/** The gate overdrive a vov, gmId or vgs constraint asks for (not w), V. */
+export function overdriveOfConstraint(model: CurrentModel, constraint: Exclude<Constraint, 'w'>, value: number, vt: number, n: number, ut: number, vds: number): number {
+  if (constraint === 'vov') return value;
+  if (constraint === 'vgs') return value - vt;
+  return overdriveForGmId(model, n, ut, vds, value);
+}
+
+/**
+ * Sizes a device: the width for the target (unsnapped), then the drawn width (fingers no wider than the
+ * limit, each snapped to wgrid and at least wmin), then the operating point actually reached with that
+ * width. For vov and gmId targets VGS is re-solved so that ID stays at the target; for a vgs target VGS
+ * is kept and the reached ID is reported; for a w target VGS is solved for ID and must stay ≤ vdd.
+ */
+export function solveSize(device: PreparedDevice, model: CurrentModel, target: SizeTarget): Sizing {
+  const { params, ut, kp } = device;
+  const { id, l, vds, vsb } = target;
+  const constraint = constraintOf(target);
+  checkLength(device, l);
+  const vt = thresholdAt(device, vsb);
+  const n = slopeFactor(params, vsb);
+  const lambda = lambdaAtLength(params, l);
+  const maxFingerWidth = target.maxFingerWidth ?? DEFAULT_MAX_FINGER_WIDTH;
+
+  let wRequired: number;
+  if (constraint === 'w') {
+    wRequired = target.w as number;
+    if (wRequired < params.wmin) throw new EngineError('W_BELOW_WMIN', `W = ${say(wRequired, 'm')} is below the process minimum wmin = ${say(params.wmin, 'm')}`, 'w');
+  } else {
+    const vov = overdriveOfConstraint(model, constraint, target[constraint] as number, vt, n, ut, vds);
+    wRequired = (id / drainCurrent(model, kp, n, ut, lambda, vov, vds)) * l;
+  }
+  if (!(wRequired <= MAX_WIDTH)) {
+    throw new EngineError('W_TOO_LARGE', `This target needs W = ${say(wRequired, 'm')}, more than ${say(MAX_WIDTH, 'm')}; raise the overdrive or lower gm/ID`, constraint === 'w' ? 'w' : constraint);
+  }
+  const snapped = snapWidth(wRequired, params.wgrid, params.wmin, maxFingerWidth);
+  const beta = (kp * snapped.w) / l;
+
+  let vgs: number;
+  if (constraint === 'vgs') {
+    vgs = target.vgs as number;
+  } else {
+    vgs = vt + overdriveForCurrent(model, beta, n, ut, lambda, vds, id);
+    if (constraint === 'w' && vgs > device.vdd) {
+      const most = drainCurrent(model, beta, n, ut, lambda, device.vdd - vt, vds);
+      throw new EngineError(
+        'ID_NOT_REACHABLE_BELOW_VDD',
+        `W = ${say(snapped.w, 'm')} cannot carry ${say(id, 'A')} with VGS ≤ vdd = ${say(device.vdd, 'V')}: it would need VGS = ${say(vgs, 'V')}; at vdd it carries ${say(most, 'A')}`,
+        'id',
+      );
+    }
+  }
+
+  const op = operatingPoint(device, model, snapped.w, l, { vgs, vds, vsb });
+  const warnings = operatingPointWarnings(device, model, op);
+  if (snapped.raisedToWmin) {
+    warnings.push({
+      code: 'W_BELOW_WMIN',
+      message: `The width needed, ${say(wRequired / snapped.fingers, 'm')} per finger, is below wmin = ${say(params.wmin, 'm')}: the finger was widened to wmin${constraint === 'vgs' ? ', so ID is above the target' : ' and VGS lowered to keep ID'}; a longer L brings W back above wmin.`,
+    });
+  }
+  return { ...op, fingers: snapped.fingers, fingerWidth: snapped.fingerWidth, wRequired, constraint, warnings };
+}

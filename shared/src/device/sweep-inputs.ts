@@ -1,0 +1,67 @@
+/** Full-length scratch arrays for the quantities that vary along a series, reused from call to call (none is returned). */
+export class Scratch {
+  private static cached: Scratch | undefined;
+  readonly ut: Float64Array;
+  readonly kp: Float64Array;
+  readonly vtZeroBias: Float64Array;
+  readonly vt: Float64Array;
+  readonly n: Float64Array;
+  readonly gmbRatio: Float64Array;
+  readonly lambda: Float64Array;
+  readonly w: Float64Array;
+  readonly beta: Float64Array;
+  readonly vov: Float64Array;
+  readonly vdsat: Float64Array;
+
+  static forPoints(count: number): Scratch {
+    if (Scratch.cached?.ut.length !== count) Scratch.cached = new Scratch(count);
+    return Scratch.cached;
+  }
+
+  private constructor(count: number) {
+    const make = () => new Float64Array(count);
+    this.ut = make();
+    this.kp = make();
+    this.vtZeroBias = make();
+    this.vt = make();
+    this.n = make();
+    this.gmbRatio = make();
+    this.lambda = make();
+    this.w = make();
+    this.beta = make();
+    this.vov = make();
+    this.vdsat = make();
+  }
+}
+
+/**
+ * The inputs of a series point by point. Each is a column in the sense of drain-current.ts: one value for
+ * every point (length 1) when it does not change along the series, else one value per point.
+ */
+export interface SeriesInputs {
+  tempC: Float64Array;
+  ut: Float64Array;
+  kp: Float64Array;
+  vtZeroBias: Float64Array;
+  vsb: Float64Array;
+  vt: Float64Array;
+  n: Float64Array;
+  gmbRatio: Float64Array;
+  l: Float64Array;
+  lambda: Float64Array;
+  vds: Float64Array;
+  w: Float64Array;
+  beta: Float64Array;
+  vov: Float64Array;
+}
+
+export interface KernelOutputs {
+  id: Float64Array;
+  gm: Float64Array;
+  gds: Float64Array;
+  gmId: Float64Array;
+  vdsat: Float64Array;
+}
+
+/** A column holding one value for every point (see drain-current.ts). */
+export const one = (value: number) => Float64Array.of(value);
