@@ -36,6 +36,8 @@ export async function createApp(options: CreateAppOptions = {}): Promise<NestExp
     new Logger('ServeClient').warn(`No client build in ${config.clientDist}: serving the API only`);
   }
   app.setGlobalPrefix(API_PREFIX);
+  // API answers are computed per request, so an ETag only costs a hash of every body (a large sweep is MBs).
+  app.set('etag', false);
   app.use(helmet(HELMET_OPTIONS));
   if (config.corsOrigins.length > 0) app.enableCors({ origin: config.corsOrigins });
   app.useBodyParser('json', { limit: BODY_LIMIT });

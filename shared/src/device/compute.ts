@@ -70,24 +70,26 @@ export function computeSize(request: SizeRequestInput, process?: Process): SizeR
   return sizeResponse(resolved, solveSize(device, parsed.model, parsed), parsed.polarity, parsed.flavour, parsed.model, device.corner, device.temperature);
 }
 
-/** POST /api/compute/sweep: the columnar sweep turned into points, NaN and infinities as null. */
-export function computeSweep(request: SweepRequestInput, process?: Process): SweepResponse {
+/** The parsed request, its process and the columnar sweep with its chosen point: one run of the engine. */
+function runSweep(request: SweepRequestInput, process?: Process) {
   const parsed = parseOrThrow(sweepRequestSchema, request);
   const resolved = resolveProcess(parsed.process, process);
   checkRequestAgainstProcess(parsed, resolved);
   const result = sweep(parsed, resolved);
   const base = sizeResponse(resolved, result.base, parsed.polarity, parsed.flavour, parsed.model, parsed.corner, parsed.temperature ?? resolved.tnom);
+  const head = { ...context(parsed.polarity, parsed.flavour, parsed.model), param: result.param, hold: result.hold, fields: [...result.fields], base };
+  return { result, head };
+}
+
+/** POST /api/compute/sweep: the columnar sweep turned into points, NaN and infinities as null. */
+export function computeSweep(request: SweepRequestInput, process?: Process): SweepResponse {
+  const { result, head } = runSweep(request, process);
   return {
-    ...context(parsed.polarity, parsed.flavour, parsed.model),
-    param: result.param,
-    hold: result.hold,
-    fields: [...result.fields],
-    base,
+    ...head,
     series: result.series.map((series) => ({ corner: series.corner, temperature: series.temperature, points: pointsOf(result, series), warnings: series.warnings })),
   };
 }
 
-/** Points as objects, filled field by field (each pass stores one key: fast, and the same object shape for every point). */
 function pointsOf(result: SweepColumns, series: SweepColumns['series'][number]): SweepPoint[] {
   const { param } = result;
   const fields = result.fields.filter((field) => field !== param);
