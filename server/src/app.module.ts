@@ -1,4 +1,6 @@
 import { Module, type DynamicModule } from '@nestjs/common';
+import { AuditModule } from './audit/audit.module.js';
+import { ProjectAuditModule } from './audit/project-audit.module.js';
 import { AuthModule } from './auth/auth.module.js';
 import { ComputeModule } from './compute/compute.module.js';
 import { serveClient } from './common/static/serve-client.js';
@@ -6,7 +8,13 @@ import type { AppConfig } from './config/app-config.js';
 import { ConfigModule } from './config/config.module.js';
 import { DatabaseModule } from './database/database.module.js';
 import { HealthModule } from './health/health.module.js';
+import { MailModule } from './mail/mail.module.js';
+import { ProcessesModule } from './processes/processes.module.js';
+import { ProjectsModule } from './projects/projects.module.js';
+import { ReviewsModule } from './reviews/reviews.module.js';
+import { RevisionsModule } from './revisions/revisions.module.js';
 import { SeedModule } from './seed/seed.module.js';
+import { SheetsModule } from './sheets/sheets.module.js';
 import { UsersModule } from './users/users.module.js';
 
 /** The whole server, configured from one parsed AppConfig. Feature modules join the imports here. */
@@ -23,6 +31,14 @@ export class AppModule {
         HealthModule,
         ComputeModule,
         SeedModule,
+        ProcessesModule,
+        MailModule,
+        AuditModule,
+        ProjectAuditModule,
+        ProjectsModule,
+        SheetsModule,
+        RevisionsModule,
+        ReviewsModule,
         ...serveClient(config.clientDist),
       ],
     };

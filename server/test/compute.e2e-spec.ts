@@ -116,6 +116,36 @@ describe('compute API', () => {
     expect(response.body.extremes.id.min.value).toBe(Math.min(...ids));
   });
 
+  describe('a stored process named by processId', () => {
+    const seededId = async () => {
+      const list = await t.http().get('/api/processes').set(bearer(token));
+      return list.body.find((p: { name: string }) => p.name === BF180G.name).id as string;
+    };
+
+    it('gives the same answer as the same process sent inline', async () => {
+      const processId = await seededId();
+      const { process: _inline, ...byReference } = sizeBody;
+      const stored = await post('size', { ...byReference, processId });
+      const inline = await post('size', sizeBody);
+      expect(stored.status).toBe(200);
+      expect(stored.body.w).toBe(inline.body.w);
+      expect(stored.body.vgs).toBe(inline.body.vgs);
+      const version = await post('size', { ...byReference, processId, processVersion: 1 });
+      expect(version.status).toBe(200);
+      expect(version.body.w).toBe(inline.body.w);
+    });
+
+    it('answers 404 naming processId for an unknown profile and processVersion for a missing version', async () => {
+      const { process: _inline, ...byReference } = sizeBody;
+      const unknown = await post('size', { ...byReference, processId: 'no-such-profile' });
+      expect(unknown.status).toBe(404);
+      expect(unknown.body.field).toBe('processId');
+      const missing = await post('sweep', { ...byReference, processId: await seededId(), processVersion: 99, hold: 'id', sweep: { param: 'vov', from: 0.1, to: 0.4, points: 4 } });
+      expect(missing.status).toBe(404);
+      expect(missing.body.field).toBe('processVersion');
+    });
+  });
+
   describe('bad input answers 400 naming the field', () => {
     const cases: Array<[string, Record<string, unknown>, string]> = [
       ['a string for the current', { id: '20u' }, 'id'],

@@ -1,6 +1,7 @@
 import {
   type CornersRequestInput,
   type CornersResponse,
+  type Process,
   type SizeRequestInput,
   type SizeResponse,
   type SweepRequestInput,
@@ -8,23 +9,36 @@ import {
 } from '@channelwright/shared/schemas';
 import { computeCorners, computeSize, computeSweep } from '@channelwright/shared/device';
 import { Injectable } from '@nestjs/common';
+import { ProcessesService } from '../processes/processes.service.js';
+
+type ProcessSource = { processId?: unknown; processVersion?: unknown };
 
 /**
  * Thin around the engine: the engine parses the request with the shared schema (an EngineError naming
  * the field when it is wrong), checks it against the process and computes; this service only supplies
- * the stored process when the request names one by id.
+ * the stored process version when the request names a profile by id (404 PROCESS_NOT_FOUND otherwise).
  */
 @Injectable()
 export class ComputeService {
-  size(request: SizeRequestInput): SizeResponse {
-    return computeSize(request);
+  constructor(private readonly processes: ProcessesService) {}
+
+  async size(request: SizeRequestInput): Promise<SizeResponse> {
+    return computeSize(request, await this.storedProcess(request));
   }
 
-  sweep(request: SweepRequestInput): SweepResponse {
-    return computeSweep(request);
+  async sweep(request: SweepRequestInput): Promise<SweepResponse> {
+    return computeSweep(request, await this.storedProcess(request));
   }
 
-  corners(request: CornersRequestInput): CornersResponse {
-    return computeCorners(request);
+  async corners(request: CornersRequestInput): Promise<CornersResponse> {
+    return computeCorners(request, await this.storedProcess(request));
+  }
+
+  /** The stored definition a request names; undefined for an inline process (or a malformed id the engine will name). */
+  private async storedProcess(request: ProcessSource): Promise<Process | undefined> {
+    if (typeof request?.processId !== 'string' || request.processId.length === 0) return undefined;
+    const version = Number.isInteger(request.processVersion) && (request.processVersion as number) > 0 ? (request.processVersion as number) : undefined;
+    if (request.processVersion !== undefined && version === undefined) return undefined; // the engine's schema names processVersion
+    return (await this.processes.resolveDefinition(request.processId, version)).definition;
   }
 }

@@ -1,7 +1,13 @@
 import type { MigrationInterface } from 'typeorm';
 import { CreateUsers1796164741627 } from './1796164741627-create-users.js';
+import { CreateProcessProfiles1796250000000 } from './1796250000000-create-process-profiles.js';
+import { CreateMail1796400000000 } from './1796400000000-create-mail.js';
+import { CreateAuditEvents1796400000001 } from './1796400000001-create-audit-events.js';
+import { CreateProjectsAndSheets1796450000000 } from './1796450000000-create-projects-and-sheets.js';
+import { CreateRevisions1796500000000 } from './1796500000000-create-revisions.js';
+import { CreateReviews1796500000001 } from './1796500000001-create-reviews.js';
 
 type MigrationClass = new () => MigrationInterface;
 
 /** Every migration, oldest first. A feature appends its own; never edit one that has shipped. */
-export const MIGRATIONS: MigrationClass[] = [CreateUsers1796164741627];
+export const MIGRATIONS: MigrationClass[] = [CreateUsers1796164741627, CreateProcessProfiles1796250000000, CreateMail1796400000000, CreateAuditEvents1796400000001, CreateProjectsAndSheets1796450000000, CreateRevisions1796500000000, CreateReviews1796500000001];

@@ -1,0 +1,24 @@
+import { Injectable } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import type { DataSource } from 'typeorm';
+import type { DomainError } from '../common/errors/domain-error.js';
+import type { ProjectResourceResolver } from '../projects/project-resource-resolver.js';
+import { sheetNotFound } from './sheet-reader.js';
+import { SheetEntity } from './sheet.entity.js';
+
+/** Lets `@ProjectAccess(need, 'sheet')` find the project of /api/sheets/:id. */
+@Injectable()
+export class SheetProjectResolver implements ProjectResourceResolver {
+  readonly kind = 'sheet';
+
+  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+
+  async projectIdOf(sheetId: string): Promise<string | null> {
+    const sheet = await this.dataSource.getRepository(SheetEntity).findOne({ select: { id: true, projectId: true }, where: { id: sheetId } });
+    return sheet?.projectId ?? null;
+  }
+
+  notFound(): DomainError {
+    return sheetNotFound();
+  }
+}

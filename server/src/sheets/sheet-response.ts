@@ -1,0 +1,116 @@
+import { ENGINE_VERSION } from '@channelwright/shared/device';
+import {
+  cornerNames,
+  type Device,
+  type DeviceComputeError,
+  type DeviceResult,
+  type DeviceTargets,
+  type Sheet,
+  type SheetProcess,
+  type SheetSummary,
+} from '@channelwright/shared/schemas';
+import type { ResolvedProcess } from '../processes/processes.service.js';
+import type { DeviceEntity } from './device.entity.js';
+import { constraintOf, sizeRequestOf } from './device-targets.js';
+import type { SheetEntity } from './sheet.entity.js';
+import { sheetTotals } from './sheet-totals.js';
+
+/** A sheet with everything its response needs, read in one go (see SheetReader). */
+export interface LoadedSheet {
+  sheet: SheetEntity;
+  process: ResolvedProcess;
+  /** The newest version of the sheet's profile. */
+  latestVersion: number;
+  devices: DeviceEntity[];
+  /** Version number of every process version id the devices were computed on. */
+  versionNumbers: ReadonlyMap<string, number>;
+}
+
+/** Why a stored result is stale: another engine version, or another process version than the sheet's. */
+export function staleReasonsOf(device: Pick<DeviceEntity, 'engineVersion' | 'processVersionId'>, sheet: Pick<SheetEntity, 'processVersionId'>): Array<'engine' | 'process'> {
+  return [...(device.engineVersion !== ENGINE_VERSION ? (['engine'] as const) : []), ...(device.processVersionId !== sheet.processVersionId ? (['process'] as const) : [])];
+}
+
+export function targetsOf(device: DeviceEntity): DeviceTargets {
+  return JSON.parse(device.targets) as DeviceTargets;
+}
+
+export function resultOf(device: DeviceEntity): DeviceResult | null {
+  return device.result === null ? null : (JSON.parse(device.result) as DeviceResult);
+}
+
+function errorOf(device: DeviceEntity): DeviceComputeError | null {
+  return device.error === null ? null : (JSON.parse(device.error) as DeviceComputeError);
+}
+
+export function toDevice(device: DeviceEntity, loaded: Pick<LoadedSheet, 'sheet' | 'process' | 'versionNumbers'>): Device {
+  const targets = targetsOf(device);
+  const staleReasons = staleReasonsOf(device, loaded.sheet);
+  return {
+    id: device.id,
+    sheetId: device.sheetId,
+    position: device.position,
+    version: device.version,
+    targets,
+    constraint: constraintOf(targets),
+    sizeRequest: sizeRequestOf(targets, loaded.sheet, loaded.process),
+    result: resultOf(device),
+    error: errorOf(device),
+    computedWith: {
+      engineVersion: device.engineVersion,
+      processVersionId: device.processVersionId,
+      processVersion: loaded.versionNumbers.get(device.processVersionId) ?? 0,
+      computedAt: device.computedAt.toISOString(),
+    },
+    stale: staleReasons.length > 0,
+    staleReasons,
+    createdAt: device.createdAt.toISOString(),
+    updatedAt: device.updatedAt.toISOString(),
+  };
+}
+
+export function toSheetProcess(process: ResolvedProcess, latestVersion: number): SheetProcess {
+  const { definition } = process;
+  return {
+    profileId: process.profileId,
+    name: process.name,
+    versionId: process.versionId,
+    version: process.version,
+    latestVersion,
+    deprecated: process.deprecated,
+    vdd: definition.vdd,
+    tnom: definition.tnom,
+    corners: cornerNames(definition),
+    flavours: (definition.flavours ?? []).map((flavour) => ({ name: flavour.name, polarity: flavour.polarity })),
+  };
+}
+
+export function toSheetSummary(loaded: LoadedSheet): SheetSummary {
+  const { sheet } = loaded;
+  const staleCount = loaded.devices.filter((device) => staleReasonsOf(device, sheet).length > 0).length;
+  return {
+    id: sheet.id,
+    projectId: sheet.projectId,
+    name: sheet.name,
+    description: sheet.description,
+    process: toSheetProcess(loaded.process, loaded.latestVersion),
+    temperature: sheet.temperature,
+    corner: sheet.corner,
+    model: sheet.model,
+    version: sheet.version,
+    deviceCount: loaded.devices.length,
+    staleCount,
+    stale: staleCount > 0,
+    createdAt: sheet.createdAt.toISOString(),
+    updatedAt: sheet.updatedAt.toISOString(),
+  };
+}
+
+export function toSheet(loaded: LoadedSheet): Sheet {
+  const devices = loaded.devices.map((device) => toDevice(device, loaded));
+  return {
+    ...toSheetSummary(loaded),
+    devices,
+    totals: sheetTotals(devices, loaded.process.definition),
+  };
+}

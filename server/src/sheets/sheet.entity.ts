@@ -1,0 +1,53 @@
+import { MODELS } from '@channelwright/shared/schemas';
+import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn, type Relation } from 'typeorm';
+import { ProcessVersionEntity } from '../processes/process-version.entity.js';
+import { ProjectEntity } from '../projects/project.entity.js';
+
+/** A sizing sheet: the devices of one circuit, on one process profile version, with their defaults. */
+@Entity('sheets')
+@Index('IDX_sheets_project', ['projectId'])
+export class SheetEntity {
+  @PrimaryGeneratedColumn('uuid')
+  id: string;
+
+  @Column({ type: 'varchar' })
+  projectId: string;
+
+  @ManyToOne(() => ProjectEntity, { nullable: false, onDelete: 'RESTRICT' })
+  @JoinColumn({ name: 'projectId', foreignKeyConstraintName: 'FK_sheets_project' })
+  project: Relation<ProjectEntity>;
+
+  @Column({ type: 'varchar', length: 100 })
+  name: string;
+
+  @Column({ type: 'text', default: '' })
+  description: string;
+
+  /** The process version the devices are sized on; a stored result made on another one is stale. */
+  @Column({ type: 'varchar' })
+  processVersionId: string;
+
+  @ManyToOne(() => ProcessVersionEntity, { nullable: false, onDelete: 'RESTRICT' })
+  @JoinColumn({ name: 'processVersionId', foreignKeyConstraintName: 'FK_sheets_processVersion' })
+  processVersion: Relation<ProcessVersionEntity>;
+
+  /** Default temperature of the devices, °C; the process tnom when null. */
+  @Column({ type: 'real', nullable: true })
+  temperature: number | null;
+
+  @Column({ type: 'varchar', length: 50, default: 'TT' })
+  corner: string;
+
+  @Column({ type: 'simple-enum', enum: MODELS, default: 'all-region' })
+  model: (typeof MODELS)[number];
+
+  /** Optimistic concurrency: raised by every change of the sheet's own fields. */
+  @Column({ type: 'integer', default: 1 })
+  version: number;
+
+  @CreateDateColumn()
+  createdAt: Date;
+
+  @UpdateDateColumn()
+  updatedAt: Date;
+}

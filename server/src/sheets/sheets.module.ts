@@ -1,0 +1,35 @@
+import { Module } from '@nestjs/common';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { AuditModule } from '../audit/audit.module.js';
+import { ProcessesModule } from '../processes/processes.module.js';
+import { PROJECT_RESOURCE_RESOLVERS } from '../projects/project-resource-resolver.js';
+import { ProjectsModule } from '../projects/projects.module.js';
+import { DEMO_SEEDERS } from '../seed/demo-seeder.js';
+import { DeviceEntity } from './device.entity.js';
+import { DevicesController } from './devices.controller.js';
+import { DevicesService } from './devices.service.js';
+import { ProjectSheetsController } from './project-sheets.controller.js';
+import { SheetProjectResolver } from './sheet-project.resolver.js';
+import { SheetReader } from './sheet-reader.js';
+import { SheetEntity } from './sheet.entity.js';
+import { SheetsController } from './sheets.controller.js';
+import { SheetsDemoSeeder } from './sheets-demo.seeder.js';
+import { SheetsService } from './sheets.service.js';
+
+/**
+ * Sizing sheets and their devices, with results computed by the engine and stored. Exports SheetReader
+ * (a sheet with its process version and devices, e.g. for freezing a revision) and SheetsService.
+ */
+@Module({
+  imports: [TypeOrmModule.forFeature([SheetEntity, DeviceEntity]), ProcessesModule, ProjectsModule, AuditModule],
+  controllers: [ProjectSheetsController, SheetsController, DevicesController],
+  providers: [
+    SheetsService,
+    DevicesService,
+    SheetReader,
+    { provide: PROJECT_RESOURCE_RESOLVERS, useClass: SheetProjectResolver },
+    { provide: DEMO_SEEDERS, useClass: SheetsDemoSeeder },
+  ],
+  exports: [SheetsService, SheetReader],
+})
+export class SheetsModule {}

@@ -1,0 +1,103 @@
+import type { CreateSheetRequest, Sheet, SheetSummary, UpdateSheetRequest } from '@channelwright/shared/schemas';
+import { Injectable } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import type { DataSource } from 'typeorm';
+import { AuditService } from '../audit/audit.service.js';
+import { sheetAudit, sheetFields } from '../audit/sheet-audit.js';
+import { runInTransaction } from '../database/run-in-transaction.js';
+import { ProcessesService } from '../processes/processes.service.js';
+import { ProjectEntity } from '../projects/project.entity.js';
+import { assertSheetHasNoRevisions } from '../revisions/assert-sheet-has-no-revisions.js';
+import { assertVersion } from '../projects/stale-edit.js';
+import { computationColumns, computeDevice } from './device-computation.js';
+import { DeviceEntity } from './device.entity.js';
+import { sheetCsv, sheetCsvFileName } from './sheet-csv.js';
+import { assertSheetCorner, chosenProcess } from './sheet-process-choice.js';
+import { sheetNotFound, SheetReader } from './sheet-reader.js';
+import { targetsOf, toSheet, toSheetSummary } from './sheet-response.js';
+import { SheetEntity } from './sheet.entity.js';
+
+/** Sheets of a project: create on a process version, edit (or move to another version), delete, recompute. Callers check access. */
+@Injectable()
+export class SheetsService {
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly processes: ProcessesService,
+    private readonly reader: SheetReader,
+    private readonly audit: AuditService,
+  ) {}
+
+  async list(projectId: string): Promise<SheetSummary[]> {
+    return (await this.reader.loadProject(projectId)).map(toSheetSummary);
+  }
+
+  async get(sheetId: string): Promise<Sheet> {
+    return toSheet(await this.reader.load(sheetId));
+  }
+
+  /** The sheet as CSV (see sheetCsv for the layout) and its file name. */
+  async exportCsv(sheetId: string): Promise<{ fileName: string; csv: string }> {
+    const sheet = await this.get(sheetId);
+    const project = await this.dataSource.getRepository(ProjectEntity).findOneByOrFail({ id: sheet.projectId });
+    return { fileName: sheetCsvFileName(project.name, sheet.name), csv: sheetCsv(sheet, project.name, new Date()) };
+  }
+
+  async create(projectId: string, request: CreateSheetRequest): Promise<Sheet> {
+    const id = await runInTransaction(this.dataSource, async (manager) => {
+      const process = (await chosenProcess(this.processes, manager, request))!;
+      assertSheetCorner(process.definition, request.corner);
+      const { processId: _id, processVersion: _version, ...fields } = request;
+      const sheet = await manager.getRepository(SheetEntity).save(manager.create(SheetEntity, { ...fields, projectId, processVersionId: process.versionId }));
+      await this.audit.record(manager, sheetAudit('sheet.created', sheet, undefined, sheetFields(sheet)));
+      return sheet.id;
+    });
+    return this.get(id);
+  }
+
+  /**
+   * Edits the sheet's own fields. A move to another process version keeps every stored result, which is
+   * then stale until recompute. 409 STALE_EDIT (nothing written) when `version` is not the stored one.
+   */
+  async update(sheetId: string, request: UpdateSheetRequest): Promise<Sheet> {
+    await runInTransaction(this.dataSource, async (manager) => {
+      const loaded = await this.reader.load(sheetId, manager);
+      const { sheet } = loaded;
+      assertVersion('sheet', sheet, request.version);
+      const process = (await chosenProcess(this.processes, manager, request, loaded.process.profileId)) ?? loaded.process;
+      const { version: _edited, processId: _id, processVersion: _number, ...fields } = request;
+      const corner = fields.corner ?? sheet.corner;
+      assertSheetCorner(process.definition, corner);
+      const before = sheetFields(sheet);
+      await manager.getRepository(SheetEntity).save(Object.assign(sheet, fields, { processVersionId: process.versionId, version: sheet.version + 1 }));
+      await this.audit.record(manager, sheetAudit('sheet.updated', sheet, before, sheetFields(sheet)));
+    });
+    return this.get(sheetId);
+  }
+
+  /** Deletes the sheet and its devices; with `version`, 409 STALE_EDIT when it is not the stored one. */
+  async remove(sheetId: string, version: number | undefined): Promise<void> {
+    await runInTransaction(this.dataSource, async (manager) => {
+      const sheet = await manager.getRepository(SheetEntity).findOneBy({ id: sheetId });
+      if (!sheet) throw sheetNotFound();
+      assertVersion('sheet', sheet, version);
+      await assertSheetHasNoRevisions(manager, sheetId);
+      await manager.getRepository(DeviceEntity).delete({ sheetId });
+      await manager.getRepository(SheetEntity).delete({ id: sheetId });
+      await this.audit.record(manager, sheetAudit('sheet.deleted', sheet, sheetFields(sheet)));
+    });
+  }
+
+  /** Recomputes every device with the current engine on the sheet's process version, all in one transaction. */
+  async recompute(sheetId: string): Promise<Sheet> {
+    await runInTransaction(this.dataSource, async (manager) => {
+      const loaded = await this.reader.load(sheetId, manager);
+      const devices = manager.getRepository(DeviceEntity);
+      for (const device of loaded.devices) {
+        const computation = computeDevice(targetsOf(device), loaded.sheet, loaded.process);
+        await devices.save(Object.assign(device, computationColumns(computation), { version: device.version + 1 }));
+      }
+      await this.audit.record(manager, sheetAudit('sheet.recomputed', loaded.sheet, undefined, { devices: loaded.devices.length, processVersionId: loaded.process.versionId }));
+    });
+    return this.get(sheetId);
+  }
+}

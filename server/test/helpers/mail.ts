@@ -1,0 +1,19 @@
+import type { ReceivedMail } from '@channelwright/shared/schemas';
+import { MailDeliveryService } from '../../src/mail/mail-delivery.service.js';
+import { MailboxService } from '../../src/mail/mailbox.service.js';
+import type { TestApp } from './test-app.js';
+
+/**
+ * Waits until the outbox has nothing left to attempt now, then returns what the local SMTP sink
+ * received for `to` (newest first). The sink stores a message before it answers the DATA command,
+ * so once the delivery round is over every delivered message is in the table.
+ */
+export async function receivedMail(t: TestApp, to: string): Promise<ReceivedMail[]> {
+  await t.app.get(MailDeliveryService).idle();
+  return t.app.get(MailboxService).received({ exactTo: to, limit: 500 });
+}
+
+/** The outbox rows as stored, oldest first. */
+export function outboxRows(t: TestApp): Promise<Array<{ id: string; recipient: string; subject: string; state: string; attempts: number; lastError: string | null }>> {
+  return t.dataSource.query('SELECT "id", "recipient", "subject", "state", "attempts", "lastError" FROM "outbox_messages" ORDER BY "createdAt", "rowid"');
+}

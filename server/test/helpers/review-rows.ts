@@ -1,0 +1,9 @@
+import type { TestApp } from './test-app.js';
+
+/** Every row of the tables a change of a revision could touch, for "nothing was written" checks. */
+export async function snapshotRows(t: TestApp): Promise<Record<string, unknown[]>> {
+  const tables = ['revisions', 'revision_devices', 'review_requests', 'revision_comments', 'audit_events', 'outbox_messages'];
+  const rows: Record<string, unknown[]> = {};
+  for (const table of tables) rows[table] = await t.dataSource.query(`SELECT * FROM "${table}" ORDER BY rowid`);
+  return rows;
+}
