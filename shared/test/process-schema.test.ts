@@ -23,12 +23,25 @@ describe('processSchema', () => {
     expect(native?.params.vt0).toBeLessThan(0);
   });
 
-  it('refuses a value out of its range and names the field', () => {
-    expect(firstIssue({ ...BF180G, nmos: { ...BF180G.nmos, kp: 5 } })).toEqual({ field: 'nmos.kp', message: 'kp must be in 0.00001 A/V² … 0.002 A/V²' });
+  it('refuses a value beyond its hard limits and names the field', () => {
+    expect(firstIssue({ ...BF180G, nmos: { ...BF180G.nmos, kp: 5 } })).toEqual({ field: 'nmos.kp', message: 'kp must be in 0 A/V² … 0.1 A/V²' });
     expect(firstIssue({ ...BF180G, pmos: { ...BF180G.pmos, tox: 0 } }).field).toBe('pmos.tox');
     expect(firstIssue({ ...BF180G, vdd: Number.NaN }).field).toBe('vdd');
     expect(firstIssue({ ...BF180G, nmos: { ...BF180G.nmos, vt0: '0.45' } })).toEqual({ field: 'nmos.vt0', message: 'vt0 must be a number in V' });
     expect(firstIssue({ ...BF180G, nmos: { ...BF180G.nmos, wgrid: 1e-6 } }).field).toBe('nmos.wgrid');
+  });
+
+  it('accepts a value outside the plausible range but within the hard limits (the editor warns about it)', () => {
+    const kp = DEVICE_PARAMETERS.find((p) => p.name === 'kp');
+    const unusual = 3e-3; // above the plausible 2 mA/V², a possible but unusual kp
+    expect(unusual).toBeGreaterThan(kp?.max as number);
+    expect(processSchema.safeParse({ ...BF180G, nmos: { ...BF180G.nmos, kp: unusual } }).success).toBe(true);
+    // Every hard limit contains the plausible range it stands behind.
+    for (const info of DEVICE_PARAMETERS) {
+      const limit = (info as { limit?: { min: number; max: number } }).limit ?? info;
+      expect(limit.min, info.name).toBeLessThanOrEqual(info.min);
+      expect(limit.max, info.name).toBeGreaterThanOrEqual(info.max);
+    }
   });
 
   it('requires TT, when listed, to be the nominal parameters, and corner names to be unique', () => {
