@@ -1,11 +1,10 @@
-import { createServer, type AddressInfo } from 'node:net';
 import { receivedMailSchema } from '@channelwright/shared/schemas';
 import { runInTransaction } from '../src/database/run-in-transaction.js';
 import { MailDeliveryService } from '../src/mail/mail-delivery.service.js';
 import { MailSinkService } from '../src/mail/mail-sink.service.js';
 import { MailService } from '../src/mail/mail.service.js';
 import { DEMO_ACCOUNTS } from '../src/seed/demo-accounts.js';
-import { outboxRows, receivedMail } from './helpers/mail.js';
+import { closedPort, outboxRows, receivedMail } from './helpers/mail.js';
 import { bearer, createTestApp, type TestApp } from './helpers/test-app.js';
 
 const APP_URL = 'http://cw.brackenfold.example:8080';
@@ -111,12 +110,3 @@ describe('mail when the SMTP server cannot be reached', () => {
     expect(await t.dataSource.query(`SELECT "email" FROM "users"`)).toEqual([{ email: 'kept@brackenfold.example' }]);
   });
 });
-
-/** A port nothing listens on: bound once by us, then released. */
-async function closedPort(): Promise<number> {
-  const server = createServer();
-  await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
-  const { port } = server.address() as AddressInfo;
-  await new Promise<void>((resolve) => server.close(() => resolve()));
-  return port;
-}

@@ -1,10 +1,10 @@
 import { auditRangeEnd, auditRangeStart, type AuditEvent, type AuditQuery } from '@channelwright/shared/schemas';
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import type { DataSource, EntityManager } from 'typeorm';
-import { currentActor } from './audit-actor.js';
+import { Brackets, type DataSource, type EntityManager } from 'typeorm';
 import { AuditEventEntity } from './audit-event.entity.js';
 import type { AuditRecord } from './audit-record.js';
+import { recordAudit } from './record-audit.js';
 
 /**
  * The append-only audit trail. `record` writes on the manager of the caller's transaction, so an
@@ -15,18 +15,8 @@ import type { AuditRecord } from './audit-record.js';
 export class AuditService {
   constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
 
-  async record(manager: EntityManager, event: AuditRecord): Promise<void> {
-    await manager.getRepository(AuditEventEntity).insert({
-      at: new Date(),
-      actorId: (event.actor === undefined ? currentActor() : event.actor)?.id ?? null,
-      projectId: event.projectId ?? null,
-      entityType: event.entityType,
-      entityId: event.entityId,
-      action: event.action,
-      before: event.before === undefined ? null : JSON.stringify(event.before),
-      after: event.after === undefined ? null : JSON.stringify(event.after),
-      summary: event.summary.slice(0, 500),
-    });
+  record(manager: EntityManager, event: AuditRecord): Promise<void> {
+    return recordAudit(manager, event);
   }
 
   /** A project's events, newest first, filtered. */
@@ -35,7 +25,15 @@ export class AuditService {
       .getRepository(AuditEventEntity)
       .createQueryBuilder('event')
       .leftJoinAndSelect('event.actor', 'actor')
-      .where('event.projectId = :projectId', { projectId });
+      .where(
+        new Brackets((where) =>
+          where
+            .where('event.projectId = :projectId')
+            // Installation-wide process-version events count for every project with a sheet on that profile.
+            .orWhere(`event.entityType = 'process-profile' AND event.entityId IN (SELECT "version"."profileId" FROM "sheets" "sheet" INNER JOIN "process_versions" "version" ON "version"."id" = "sheet"."processVersionId" WHERE "sheet"."projectId" = :projectId)`),
+        ),
+      )
+      .setParameter('projectId', projectId);
     if (query.action) builder.andWhere('event.action = :action', { action: query.action });
     if (query.entityType) builder.andWhere('event.entityType = :entityType', { entityType: query.entityType });
     if (query.actor) builder.andWhere('(event.actorId = :actor OR actor.email = :actorEmail)', { actor: query.actor, actorEmail: query.actor.toLowerCase() });

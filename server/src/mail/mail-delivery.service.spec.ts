@@ -1,6 +1,6 @@
-import { createServer, type AddressInfo } from 'node:net';
 import { Test, type TestingModule } from '@nestjs/testing';
 import { DataSource } from 'typeorm';
+import { closedPort } from '../../test/helpers/mail.js';
 import { createTestEnv, type TestEnv } from '../../test/helpers/test-env.js';
 import { ConfigModule } from '../config/config.module.js';
 import { loadConfig } from '../config/load-config.js';
@@ -57,11 +57,3 @@ describe('MailDeliveryService against an SMTP server that cannot be reached', ()
     expect([...attemptsSeen].every((n) => n >= 1 && n <= QUICK_POLICY.maxAttempts)).toBe(true);
   });
 });
-
-async function closedPort(): Promise<number> {
-  const server = createServer();
-  await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
-  const { port } = server.address() as AddressInfo;
-  await new Promise<void>((resolve) => server.close(() => resolve()));
-  return port;
-}

@@ -1,5 +1,7 @@
 import { PROCESS_FILE_SCHEMA_VERSION, type Process } from '@channelwright/shared/schemas';
 import type { EntityManager } from 'typeorm';
+import { processVersionAudit } from '../audit/process-audit.js';
+import { recordAudit } from '../audit/record-audit.js';
 import { conflict, DomainError, notFound } from '../common/errors/domain-error.js';
 import type { UserEntity } from '../users/user.entity.js';
 import { diffProcesses } from './process-diff.js';
@@ -84,6 +86,7 @@ async function insertVersion(manager: EntityManager, profileId: string, number: 
   await versions.insert(
     versions.create({ profileId, number, schemaVersion: PROCESS_FILE_SCHEMA_VERSION, definition: JSON.stringify(definition), message, authorId: author?.id ?? null }),
   );
+  await recordAudit(manager, processVersionAudit(profileId, number, definition.name, message, author));
 }
 
 async function assertNameFree(manager: EntityManager, name: string, exceptId: string | undefined, field: NameField): Promise<void> {

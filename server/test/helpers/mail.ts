@@ -1,3 +1,4 @@
+import { createServer, type AddressInfo } from 'node:net';
 import type { ReceivedMail } from '@channelwright/shared/schemas';
 import { MailDeliveryService } from '../../src/mail/mail-delivery.service.js';
 import { MailboxService } from '../../src/mail/mailbox.service.js';
@@ -16,4 +17,13 @@ export async function receivedMail(t: TestApp, to: string): Promise<ReceivedMail
 /** The outbox rows as stored, oldest first. */
 export function outboxRows(t: TestApp): Promise<Array<{ id: string; recipient: string; subject: string; state: string; attempts: number; lastError: string | null }>> {
   return t.dataSource.query('SELECT "id", "recipient", "subject", "state", "attempts", "lastError" FROM "outbox_messages" ORDER BY "createdAt", "rowid"');
+}
+
+/** A port nothing listens on: bound once, then released (for "the mail server cannot be reached"). */
+export async function closedPort(): Promise<number> {
+  const server = createServer();
+  await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
+  const { port } = server.address() as AddressInfo;
+  await new Promise<void>((resolve) => server.close(() => resolve()));
+  return port;
 }

@@ -53,9 +53,11 @@ describe('readProcessCsv', () => {
     expect(problemsOf(text)).toEqual([{ row: lineNumber(text, 'kp,pmos,70 µA,'), field: 'value', message: expect.stringContaining('70 µA is a current (A)') }]);
   });
 
-  it('puts a value outside its plausible range on its own row', () => {
-    const text = withLine('vt0,nmos,0.42,V', 'vt0,nmos,2,V');
-    expect(problemsOf(text)).toEqual([{ row: lineNumber(text, 'vt0,nmos,2,V'), field: 'value', message: expect.stringMatching(/^vt0 \(nmos\): vt0 must be in -1 V … 1.5 V$/) }]);
+  it('puts a value beyond its hard limits on its own row, and takes one that is only outside the plausible range', () => {
+    const text = withLine('vt0,nmos,0.42,V', 'vt0,nmos,7,V');
+    expect(problemsOf(text)).toEqual([{ row: lineNumber(text, 'vt0,nmos,7,V'), field: 'value', message: expect.stringMatching(/^vt0 \(nmos\): vt0 must be in -5 V … 5 V$/) }]);
+    const unusual = readProcessCsv(withLine('vt0,nmos,0.42,V', 'vt0,nmos,2,V'));
+    expect(unusual.ok && unusual.definition.nmos.vt0).toBe(2);
   });
 
   it('refuses process-level fields under a device polarity and device parameters under "process"', () => {
