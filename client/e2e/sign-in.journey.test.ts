@@ -17,7 +17,7 @@ describeJourney('signing in and out', (journey) => {
     const greeting = page.getByRole('heading', { level: 1, name: /^Welcome, / });
     await greeting.waitFor();
     expect(new URL(page.url()).pathname).toBe('/');
-    expect(await page.getByRole('heading', { name: 'Your projects will appear here' }).isVisible()).toBe(true);
+    expect(await page.getByRole('heading', { name: 'Your projects' }).isVisible()).toBe(true);
     expect(await page.getByRole('note', { name: 'Caution' }).textContent()).toContain('first-order estimates');
     expect(await page.getByRole('navigation').getByRole('link', { name: 'Users' }).count()).toBe(0);
     await saveScreenshot(page, 'home-designer');

@@ -11,6 +11,7 @@ function signedInAs(user: typeof designer) {
     'GET /api/config': { body: demoConfig },
     'GET /api/auth/me': { body: user },
     'GET /api/users': { body: [admin, designer] },
+    'GET /api/projects': { body: [] },
   });
 }
 
@@ -20,7 +21,7 @@ describe('the signed-in shell', () => {
     renderApp('/', { token: 'token-ines' });
 
     expect(await screen.findByRole('heading', { name: 'Welcome, Ines Marlow' })).toBeInTheDocument();
-    expect(screen.getByRole('heading', { name: 'Your projects will appear here' })).toBeInTheDocument();
+    expect(screen.getByRole('heading', { name: 'Your projects' })).toBeInTheDocument();
     expect(screen.getByRole('note', { name: 'Caution' })).toHaveTextContent(CAUTION_TEXT);
     expect(await screen.findByText('invented demo data')).toBeInTheDocument();
     const nav = screen.getByRole('navigation');

@@ -1,6 +1,6 @@
-import { IconHome2, IconUsers, type Icon } from '@tabler/icons-react';
+import { IconChecklist, IconCpu, IconHome2, IconMail, IconMailbox, IconRuler2, IconUsers, type Icon } from '@tabler/icons-react';
 import type { ComponentType } from 'react';
-import { isAdmin, type Permission } from '../lib/session/permissions';
+import { canMaintainProcesses, isAdmin, type Permission } from '../lib/session/permissions';
 
 /** A lazily loaded page: a module whose default export is the page component. */
 export type PageModule = () => Promise<{ default: ComponentType }>;
@@ -27,7 +27,20 @@ export interface ShellRoute {
  */
 export const shellRoutes: ShellRoute[] = [
   { path: '/', page: () => import('../features/home/routes/home-route'), nav: { label: 'Home', icon: IconHome2 } },
+  { path: '/processes', page: () => import('../features/processes/routes/processes-route'), nav: { label: 'Processes', icon: IconCpu } },
+  { path: '/processes/new', page: () => import('../features/processes/routes/process-new-route'), access: canMaintainProcesses },
+  { path: '/processes/:id', page: () => import('../features/processes/routes/process-route') },
+  { path: '/processes/:id/edit', page: () => import('../features/processes/routes/process-edit-route'), access: canMaintainProcesses },
+  { path: '/workbench', page: () => import('../features/workbench/routes/scratch-device-route'), nav: { label: 'Size a device', icon: IconRuler2 } },
+  { path: '/projects/:projectId', page: () => import('../features/projects/routes/project-route') },
+  { path: '/sheets/:sheetId', page: () => import('../features/workbench/routes/sheet-route') },
+  { path: '/sheets/:sheetId/devices/:deviceId', page: () => import('../features/workbench/routes/device-route') },
+  { path: '/reviews', page: () => import('../features/reviews/routes/review-inbox-route'), nav: { label: 'Reviews', icon: IconChecklist } },
+  { path: '/revisions/:revisionId', page: () => import('../features/revisions/routes/revision-route') },
+  { path: '/projects/:projectId/audit', page: () => import('../features/audit/routes/project-audit-route') },
+  { path: '/mail', page: () => import('../features/outbox/routes/my-mail-route'), nav: { label: 'My mail', icon: IconMailbox } },
   { path: '/admin/users', page: () => import('../features/users/routes/users-route'), access: isAdmin, nav: { label: 'Users', icon: IconUsers, section: 'admin' } },
+  { path: '/admin/mail', page: () => import('../features/outbox/routes/admin-mail-route'), access: isAdmin, nav: { label: 'Mail outbox', icon: IconMail, section: 'admin' } },
 ];
 
 /** Pages outside the shell, reachable without signing in. */

@@ -1,7 +1,7 @@
 import { MantineProvider } from '@mantine/core';
 import { Notifications } from '@mantine/notifications';
 import { render, screen } from '@testing-library/react';
-import { beforeEach, describe, expect, it } from 'vitest';
+import { beforeEach, describe, expect, it, vi } from 'vitest';
 import { z } from 'zod';
 import { errorBody, installFakeApi } from '../test/fake-api';
 import { apiRequest } from './api-client';
@@ -105,5 +105,18 @@ describe('the API client', () => {
     const schema = z.object({ signupEnabled: z.boolean() });
     const error = await rejectionOf(apiRequest('/config', { schema }));
     expect(error.code).toBe('UNEXPECTED_RESPONSE');
+  });
+});
+
+describe('the API client reading a download', () => {
+  it('answers the text as it came, and still reads a refusal as the JSON error body', async () => {
+    const csv = 'key,value\r\nformat,channelwright-sheet\r\n';
+    vi.stubGlobal('fetch', vi.fn(async () => new Response(csv, { status: 200, headers: { 'Content-Type': 'text/csv' } })));
+    expect(await apiRequest('/sheets/s-1/export?format=csv', { responseType: 'text' })).toBe(csv);
+
+    installFakeApi({ 'GET /api/sheets/s-1/export': errorBody(404, 'SHEET_NOT_FOUND', 'There is no sheet with this id') });
+    const error = await rejectionOf(apiRequest('/sheets/s-1/export', { responseType: 'text', quiet: true }));
+    expect(error.code).toBe('SHEET_NOT_FOUND');
+    expect(error.message).toBe('There is no sheet with this id');
   });
 });

@@ -15,6 +15,8 @@ export interface ApiRequestOptions<T> {
   anonymous?: boolean;
   /** The caller shows the error itself (a form beside its fields): no notification. */
   quiet?: boolean;
+  /** 'text' answers the body as it came (a CSV download); errors are still read as the JSON error body. */
+  responseType?: 'json' | 'text';
   signal?: AbortSignal;
 }
 
@@ -59,6 +61,7 @@ export async function apiRequest<T = unknown>(path: string, options: ApiRequestO
     if (options.signal?.aborted) throw cause;
     return fail(ApiError.network(cause), options);
   }
+  if (response.ok && options.responseType === 'text') return (await response.text()) as T;
   const body = await readJson(response);
   if (!response.ok) {
     const error = ApiError.fromResponseBody(response.status, body);

@@ -1,6 +1,6 @@
 import { Button, Stack } from '@mantine/core';
 import type { FormEventHandler, ReactNode } from 'react';
-import { ServerErrorAlert } from './server-error-alert';
+import { ServerErrorAlert } from '../../../components/server-error-alert';
 
 interface AuthFormProps {
   /** The form's accessible name. */

@@ -1,6 +1,6 @@
 import { PageHeader } from '../../../components/page-header';
 import { useSignedInUser } from '../../../lib/session/current-user';
-import { ProjectsPlaceholder } from '../components/projects-placeholder';
+import { ProjectsSection } from '../components/projects-section';
 
 export default function HomeRoute() {
   const user = useSignedInUser();
@@ -10,7 +10,7 @@ export default function HomeRoute() {
         title={`Welcome, ${user.displayName}`}
         description="Your sizing work, its reviews and sign-offs start here."
       />
-      <ProjectsPlaceholder />
+      <ProjectsSection />
     </>
   );
 }

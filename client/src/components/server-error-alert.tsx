@@ -1,6 +1,6 @@
 import { Alert } from '@mantine/core';
 import { IconAlertCircle } from '@tabler/icons-react';
-import { isApiError } from '../../../lib/api-error';
+import { isApiError } from '../lib/api-error';
 
 /** The server's refusal, shown inside the form that caused it. */
 export function ServerErrorAlert({ title, error }: { title: string; error: unknown }) {

@@ -1,0 +1,27 @@
+import type { ProcessProfileSummary } from '@channelwright/shared/schemas';
+import { Select, Stack } from '@mantine/core';
+import { ProcessSummaryLine } from '../../../components/process-summary-line';
+
+interface ProcessPickerProps {
+  profiles: ProcessProfileSummary[];
+  value: string | null;
+  onChange: (profileId: string) => void;
+}
+
+/** Chooses the process profile to size in (its latest version); invented demo profiles say so. */
+export function ProcessPicker({ profiles, value, onChange }: ProcessPickerProps) {
+  const chosen = profiles.find((p) => p.id === value);
+  return (
+    <Stack gap={4}>
+      <Select
+        label="Process"
+        size="xs"
+        data={profiles.map((p) => ({ value: p.id, label: `${p.name} · v${p.latestVersion}` }))}
+        value={value}
+        onChange={(id) => id && onChange(id)}
+        allowDeselect={false}
+      />
+      {chosen && <ProcessSummaryLine profile={chosen} />}
+    </Stack>
+  );
+}

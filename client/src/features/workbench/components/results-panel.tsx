@@ -1,0 +1,70 @@
+import type { Polarity, SizeResponse } from '@channelwright/shared/schemas';
+import { Alert, Group, Loader, Paper, SimpleGrid, Stack, Text, Title } from '@mantine/core';
+import { IconAlertCircle } from '@tabler/icons-react';
+import { isApiError } from '../../../lib/api-error';
+import { resultGroups } from '../model/result-groups';
+import { OperatingSummary } from './operating-summary';
+import { ResultGroupTable } from './result-group-table';
+import { WarningsList } from './warnings-list';
+
+interface ResultsPanelProps {
+  result: SizeResponse | undefined;
+  polarity: Polarity;
+  /** The symbols still to be filled in before anything can be sized. */
+  missing: string[];
+  error: unknown;
+  /** The error is shown beside its field in the form, so here it is only pointed at. */
+  errorShownInForm: boolean;
+  updating: boolean;
+}
+
+function Refusal({ error, shownInForm }: { error: unknown; shownInForm: boolean }) {
+  const message = isApiError(error) || error instanceof Error ? error.message : 'The device could not be sized.';
+  return (
+    <Alert color="red" variant="light" icon={<IconAlertCircle size={18} />} title="This device cannot be sized as asked" role="alert">
+      <Text size="sm">{shownInForm ? `${message} (see the highlighted field)` : message}</Text>
+    </Alert>
+  );
+}
+
+/** The sized device: summary, cautions, then every figure in its group, each with its unit. */
+export function ResultsPanel({ result, polarity, missing, error, errorShownInForm, updating }: ResultsPanelProps) {
+  return (
+    <Stack gap="sm" aria-label="Results" role="region">
+      <Group justify="space-between" align="center" h={24}>
+        <Title order={2} fz="md">
+          Results
+        </Title>
+        {updating && (
+          <Group gap={6} role="status" aria-label="Updating results">
+            <Loader size={14} />
+            <Text size="xs" c="dimmed">
+              updating
+            </Text>
+          </Group>
+        )}
+      </Group>
+      {missing.length > 0 && (
+        <Text size="sm" c="dimmed">
+          Enter {missing.join(', ')} to size the device.
+        </Text>
+      )}
+      {error ? <Refusal error={error} shownInForm={errorShownInForm} /> : null}
+      {result && (
+        <Stack gap="sm" style={{ opacity: error || missing.length > 0 ? 0.45 : 1 }}>
+          <Paper withBorder radius="sm" p="sm">
+            <Stack gap="sm">
+              <OperatingSummary result={result} />
+              <WarningsList warnings={result.warnings} />
+            </Stack>
+          </Paper>
+          <SimpleGrid cols={{ base: 1, md: 2, xl: 3 }} spacing="xs" verticalSpacing="xs">
+            {resultGroups(result, polarity).map((group) => (
+              <ResultGroupTable key={group.title} group={group} />
+            ))}
+          </SimpleGrid>
+        </Stack>
+      )}
+    </Stack>
+  );
+}

@@ -1,0 +1,35 @@
+import type { Sheet } from '@channelwright/shared/schemas';
+import { Alert, Button, Group, Text } from '@mantine/core';
+import { IconRefresh } from '@tabler/icons-react';
+
+interface StaleBannerProps {
+  sheet: Sheet;
+  /** Present for designers and owners. */
+  onRecompute?: () => void;
+  recomputing: boolean;
+}
+
+/** Says when stored results were made by another engine or process version, and offers the recompute. */
+export function StaleBanner({ sheet, onRecompute, recomputing }: StaleBannerProps) {
+  if (!sheet.stale) return null;
+  const reasons = new Set(sheet.devices.flatMap((d) => d.staleReasons));
+  const why = [reasons.has('engine') && 'another engine version', reasons.has('process') && `another version of ${sheet.process.name}`].filter(Boolean).join(' and ');
+  return (
+    <Alert color="oxide" variant="light" title="Some results are out of date" role="alert">
+      <Group justify="space-between" align="center" wrap="wrap" gap="sm">
+        <Text size="sm">
+          {sheet.staleCount} of {sheet.deviceCount} devices were computed with {why || 'other inputs'}; their numbers may differ from what this sheet would give now.
+        </Text>
+        {onRecompute ? (
+          <Button size="xs" leftSection={<IconRefresh size={14} />} loading={recomputing} onClick={onRecompute}>
+            Recompute the sheet
+          </Button>
+        ) : (
+          <Text size="xs" c="dimmed">
+            A designer of the project can recompute it.
+          </Text>
+        )}
+      </Group>
+    </Alert>
+  );
+}

@@ -1,0 +1,90 @@
+import type { Device } from '@channelwright/shared/schemas';
+import { Button, EmptyState, Group, Paper, Stack } from '@mantine/core';
+import { notifications } from '@mantine/notifications';
+import { IconDownload, IconPlus, IconTable } from '@tabler/icons-react';
+import { useState } from 'react';
+import { Link, useParams } from 'react-router-dom';
+import { ErrorPanel } from '../../../components/error-panel';
+import { PageHeader } from '../../../components/page-header';
+import { PageLoader } from '../../../components/page-loader';
+import { useProject } from '../../../lib/projects/project';
+import { RevisionPanel } from '../../revisions/components/revision-panel';
+import { canEditSheets } from '../../../lib/projects/project-permissions';
+import { useCreateDevice } from '../api/create-device';
+import { useDeleteDevice } from '../api/delete-device';
+import { useExportSheet } from '../api/export-sheet';
+import { useSheet } from '../api/get-sheet';
+import { useRecomputeSheet } from '../api/recompute-sheet';
+import { DeleteDeviceDialog } from '../components/sheet/delete-device-dialog';
+import { DeviceTable } from '../components/sheet/device-table';
+import { SheetBreadcrumbs, SheetConditions } from '../components/sheet/sheet-heading';
+import { SheetTotals } from '../components/sheet/sheet-totals';
+import { StaleBanner } from '../components/sheet/stale-banner';
+import { copyName } from '../model/device-names';
+
+/** A sizing sheet: every device of the circuit, its totals, and the way to the device pages. */
+export default function SheetRoute() {
+  const { sheetId = '' } = useParams();
+  const sheet = useSheet(sheetId);
+  const project = useProject(sheet.data?.projectId);
+  const createDevice = useCreateDevice();
+  const deleteDevice = useDeleteDevice();
+  const recompute = useRecomputeSheet();
+  const exportSheet = useExportSheet();
+  const [toDelete, setToDelete] = useState<Device | null>(null);
+
+  if (sheet.isPending) return <PageLoader label="Loading the sheet" />;
+  if (sheet.isError) return <ErrorPanel title="The sheet could not be loaded" message={sheet.error.message} onRetry={() => void sheet.refetch()} />;
+  const data = sheet.data;
+  const editable = project.data ? canEditSheets(project.data) : false;
+  const deviceHref = (device: Device) => `/sheets/${data.id}/devices/${device.id}`;
+  const duplicate = (device: Device) =>
+    createDevice.mutate(
+      { sheetId: data.id, targets: { ...device.targets, name: copyName(device.targets.name, data.devices.map((d) => d.targets.name)) } },
+      { onSuccess: (copy) => notifications.show({ color: 'channel', message: `${device.targets.name} duplicated as ${copy.targets.name}` }) },
+    );
+
+  return (
+    <Stack gap="sm">
+      <SheetBreadcrumbs project={project.data} sheet={data} />
+      <PageHeader
+        title={data.name}
+        description={data.description || undefined}
+        actions={
+          <Group gap="xs">
+            <Button variant="default" size="xs" leftSection={<IconDownload size={14} />} loading={exportSheet.isPending} onClick={() => exportSheet.mutate({ sheetId: data.id, sheetName: data.name })}>
+              Download CSV
+            </Button>
+            {editable && (
+              <Button size="xs" leftSection={<IconPlus size={14} />} component={Link} to={`/sheets/${data.id}/devices/new`}>
+                Add device
+              </Button>
+            )}
+          </Group>
+        }
+      />
+      <SheetConditions sheet={data} />
+      <StaleBanner sheet={data} onRecompute={editable ? () => recompute.mutate(data.id) : undefined} recomputing={recompute.isPending} />
+      <RevisionPanel sheetId={data.id} sheetName={data.name} />
+      {data.devices.length === 0 ? (
+        <Paper withBorder radius="sm" p="xl">
+          <EmptyState icon={<IconTable size={28} stroke={1.5} />}>
+            <EmptyState.Title order={2}>No devices yet</EmptyState.Title>
+            <EmptyState.Description>{editable ? 'Add the first transistor of the circuit to size it.' : 'The designers of this project have not added devices yet.'}</EmptyState.Description>
+          </EmptyState>
+        </Paper>
+      ) : (
+        <Paper withBorder radius="sm" p={0}>
+          <DeviceTable devices={data.devices} deviceHref={deviceHref} onDuplicate={editable ? duplicate : undefined} onDelete={editable ? setToDelete : undefined} />
+        </Paper>
+      )}
+      <SheetTotals totals={data.totals} devices={data.devices} />
+      <DeleteDeviceDialog
+        device={toDelete}
+        deleting={deleteDevice.isPending}
+        onCancel={() => setToDelete(null)}
+        onConfirm={(device) => deleteDevice.mutate({ sheetId: data.id, deviceId: device.id, version: device.version }, { onSettled: () => setToDelete(null) })}
+      />
+    </Stack>
+  );
+}
