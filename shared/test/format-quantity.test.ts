@@ -34,6 +34,13 @@ describe('formatQuantity', () => {
     expect(formatQuantity(1e23, 'm⁻³')).toBe('1e23 m⁻³');
   });
 
+  it('writes a plain number with more whole digits than asked for as the rounded number, not in exponent form', () => {
+    expect(formatQuantity(12345, '')).toBe('12350');
+    expect(formatQuantity(1000, '', { digits: 3 })).toBe('1000');
+    expect(formatQuantity(-98765.4, '1/V')).toBe('-98770 1/V');
+    expect(formatQuantity(126.6, 'V/V')).not.toContain('e');
+  });
+
   it('writes zero as "0 A", NaN as "—" and infinities as "∞"', () => {
     expect(formatQuantity(0, 'A')).toBe('0 A');
     expect(formatQuantity(Number.NaN, 'A')).toBe('—');

@@ -40,7 +40,11 @@ function takesPrefix(unit: string): boolean {
 /** Plain digits between 1e-3 and 1e5, exponent form outside. */
 function plain(value: number, digits: number): string {
   const magnitude = Math.abs(value);
-  if (magnitude >= 1e-3 && magnitude < 1e5) return trimZeros(value.toPrecision(digits));
+  if (magnitude >= 1e-3 && magnitude < 1e5) {
+    // toPrecision writes 12345 at 4 digits as "1.235e+4"; in this range the rounded number reads better.
+    const text = value.toPrecision(digits);
+    return text.includes('e') ? String(Number(text)) : trimZeros(text);
+  }
   const [mantissa, exponent] = value.toExponential(digits - 1).split('e');
   return `${trimZeros(mantissa)}e${exponent.replace('+', '')}`;
 }

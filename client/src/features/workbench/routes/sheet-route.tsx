@@ -2,13 +2,12 @@ import type { Device } from '@channelwright/shared/schemas';
 import { Button, EmptyState, Group, Paper, Stack } from '@mantine/core';
 import { notifications } from '@mantine/notifications';
 import { IconDownload, IconPlus, IconTable } from '@tabler/icons-react';
-import { useState } from 'react';
+import { type ReactNode, useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { ErrorPanel } from '../../../components/error-panel';
 import { PageHeader } from '../../../components/page-header';
 import { PageLoader } from '../../../components/page-loader';
 import { useProject } from '../../../lib/projects/project';
-import { RevisionPanel } from '../../revisions/components/revision-panel';
 import { canEditSheets } from '../../../lib/projects/project-permissions';
 import { useCreateDevice } from '../api/create-device';
 import { useDeleteDevice } from '../api/delete-device';
@@ -22,8 +21,13 @@ import { SheetTotals } from '../components/sheet/sheet-totals';
 import { StaleBanner } from '../components/sheet/stale-banner';
 import { copyName } from '../model/device-names';
 
+export interface SheetRouteProps {
+  /** What the app puts between the sheet's conditions and its table (the revision and review panel). */
+  reviewPanel?: (sheet: { id: string; name: string }) => ReactNode;
+}
+
 /** A sizing sheet: every device of the circuit, its totals, and the way to the device pages. */
-export default function SheetRoute() {
+export default function SheetRoute({ reviewPanel }: SheetRouteProps = {}) {
   const { sheetId = '' } = useParams();
   const sheet = useSheet(sheetId);
   const project = useProject(sheet.data?.projectId);
@@ -65,7 +69,7 @@ export default function SheetRoute() {
       />
       <SheetConditions sheet={data} />
       <StaleBanner sheet={data} onRecompute={editable ? () => recompute.mutate(data.id) : undefined} recomputing={recompute.isPending} />
-      <RevisionPanel sheetId={data.id} sheetName={data.name} />
+      {reviewPanel?.({ id: data.id, name: data.name })}
       {data.devices.length === 0 ? (
         <Paper withBorder radius="sm" p="xl">
           <EmptyState icon={<IconTable size={28} stroke={1.5} />}>
