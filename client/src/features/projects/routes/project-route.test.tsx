@@ -43,6 +43,7 @@ describe('the project page', { timeout: 20_000 }, () => {
     expect(within(table).getByRole('link', { name: 'Two-stage amplifier' })).toHaveAttribute('href', '/sheets/s-amp');
     expect(within(table).getByText('BF180-G v2')).toBeInTheDocument();
     expect(screen.getByRole('combobox', { name: `Role of ${reviewer.displayName}` })).toHaveValue('Reviewer');
+    expect(screen.getByRole('link', { name: 'Audit trail' }).getAttribute('href')).toMatch(/^\/projects\/[^/]+\/audit$/);
   });
 
   it('lets an owner add a member by e-mail, showing a refusal beside the e-mail', async () => {

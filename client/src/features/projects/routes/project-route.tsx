@@ -1,7 +1,7 @@
 import { Badge, Button, EmptyState, Grid, Group, Paper, Stack, Title } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
-import { IconPlus, IconTable } from '@tabler/icons-react';
-import { useParams } from 'react-router-dom';
+import { IconHistory, IconPlus, IconTable } from '@tabler/icons-react';
+import { Link, useParams } from 'react-router-dom';
 import { ErrorPanel } from '../../../components/error-panel';
 import { PageHeader } from '../../../components/page-header';
 import { PageLoader } from '../../../components/page-loader';
@@ -45,9 +45,14 @@ export default function ProjectRoute() {
         title={data.name}
         description={data.description || undefined}
         actions={
-          <Badge variant="light" radius="sm" tt="none" size="lg">
-            {data.myRole ? `You are ${ROLE_LABELS[data.myRole].toLowerCase()}` : 'Administrator, not a member'}
-          </Badge>
+          <Group gap="xs">
+            <Button variant="default" size="xs" leftSection={<IconHistory size={14} />} component={Link} to={`/projects/${data.id}/audit`}>
+              Audit trail
+            </Button>
+            <Badge variant="light" radius="sm" tt="none" size="lg">
+              {data.myRole ? `You are ${ROLE_LABELS[data.myRole].toLowerCase()}` : 'Administrator, not a member'}
+            </Badge>
+          </Group>
         }
       />
       <Grid gap="sm" align="flex-start">
