@@ -1,7 +1,7 @@
 import { processDiffSchema, type ProcessDiff } from '@channelwright/shared/schemas';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { processKeys } from './process-keys';
+import { processKeys } from '../../../lib/processes/process-keys';
 
 /** `GET /api/processes/:id/diff?from=&to=`: which values changed between two versions. */
 export const getProcessDiff = (id: string, from: number, to: number, signal?: AbortSignal): Promise<ProcessDiff> =>

@@ -2,7 +2,7 @@ import { processVersionSummarySchema, type ProcessVersionSummary } from '@channe
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { z } from 'zod';
 import { apiRequest } from '../../../lib/api-client';
-import { processKeys } from './process-keys';
+import { processKeys } from '../../../lib/processes/process-keys';
 
 const versionsSchema = z.array(processVersionSummarySchema);
 

@@ -1,7 +1,7 @@
 import { processProfileSchema, type ProcessProfile } from '@channelwright/shared/schemas';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { processKeys } from './process-keys';
+import { processKeys } from '../../../lib/processes/process-keys';
 
 /** `GET /api/processes/:id?version=`: a profile with one version in full (the latest when `version` is absent). */
 export const getProcess = (id: string, version?: number, signal?: AbortSignal): Promise<ProcessProfile> =>

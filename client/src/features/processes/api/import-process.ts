@@ -1,7 +1,7 @@
 import { processProfileSchema, type ImportProcessFields, type ProcessProfile } from '@channelwright/shared/schemas';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { processKeys } from './process-keys';
+import { processKeys } from '../../../lib/processes/process-keys';
 
 export interface ImportProcessInput {
   file: File;

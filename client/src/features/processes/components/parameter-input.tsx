@@ -22,7 +22,8 @@ interface ParameterInputProps {
 /**
  * A process-parameter field: takes SI prefixes and units ("310u", "310 µA/V²", "0.31m"), says what it read
  * in the parameter's display unit and its plausible range, and warns as soon as the value leaves that
- * range (the server refuses such a value). Only this field re-renders while the designer types.
+ * range (a value outside it is unusual but accepted; the schema refuses only beyond the parameter's hard
+ * limits). Only this field re-renders while the designer types.
  */
 export function ParameterInput({ info, label, value, defaultValue, onChange, onBlur, onFocus, error, withAsterisk }: ParameterInputProps) {
   const [typed, setTyped] = useState(value ?? defaultValue ?? '');
@@ -35,8 +36,8 @@ export function ParameterInput({ info, label, value, defaultValue, onChange, onB
     if (!inRange(parsed.value, info)) warning = `${displayQuantity(parsed.value, info)} is outside the plausible range ${rangeText(info)}`;
     hint = `= ${displayQuantity(parsed.value, info, 6)} · ${range}`;
   }
-  // Out of range: orange while typing; red once the form refused it (the schema's message says the same, less readably).
-  const shownError = parsed && !parsed.ok ? parsed.reason : warning && error ? warning : error;
+  // Outside the plausible range: an orange warning; beyond the hard limits the form's own refusal in red.
+  const shownError = parsed && !parsed.ok ? parsed.reason : error;
 
   return (
     <TextInput

@@ -5,7 +5,7 @@ import { ErrorPanel } from '../../../components/error-panel';
 import { PageHeader } from '../../../components/page-header';
 import { PageLoader } from '../../../components/page-loader';
 import { useProcess } from '../api/get-process';
-import { processKeys } from '../api/process-keys';
+import { processKeys } from '../../../lib/processes/process-keys';
 import { useUpdateProcess } from '../api/update-process';
 import { ProcessCautions } from '../components/process-cautions';
 import { ProcessEditorForm } from '../components/process-editor-form';
