@@ -4,7 +4,13 @@
 import { existsSync, mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { buildAll, ensureInstalled, log, runNpm } from './lib.mjs';
+import { buildAll, ensureInstalled, log, run, runNpm } from './lib.mjs';
+
+// Checks that are not test runners: they pass or fail as a whole (exit code), with no test counts.
+const checks = [
+  { name: 'lint (ESLint over shared, server, client: architecture boundaries, promises, hooks)', command: 'npx', args: ['eslint', '.', '--max-warnings', '0'] },
+  { name: 'types (tsc over every workspace, its tests and configs)', command: 'npm', args: ['run', 'typecheck'] },
+];
 
 const suites = [
   { name: 'shared (device engine, units, schemas)', workspace: 'shared', script: 'test', runner: 'vitest' },
@@ -18,6 +24,13 @@ const inCi = process.env.CI === 'true';
 
 await ensureInstalled();
 await buildAll();
+
+const checkResults = [];
+for (const check of checks) {
+  if (only.length > 0 && !only.some((word) => check.name.includes(word))) continue;
+  log(`running ${check.name}…`);
+  checkResults.push({ check, exitCode: await run(check.command, check.args) });
+}
 
 const reportDir = mkdtempSync(join(tmpdir(), 'channelwright-test-'));
 const results = [];
@@ -47,6 +60,10 @@ function readCounts(file) {
 
 let failedSuites = 0;
 process.stdout.write('\n──────── Channelwright test summary ────────\n');
+for (const { check, exitCode } of checkResults) {
+  if (exitCode !== 0) failedSuites += 1;
+  process.stdout.write(`${exitCode === 0 ? 'PASS' : 'FAIL'}  ${check.name}${exitCode === 0 ? '' : `  (exit code ${exitCode})`}\n`);
+}
 for (const r of results) {
   const problems = [];
   if (r.exitCode !== 0) problems.push(`exit code ${r.exitCode}`);

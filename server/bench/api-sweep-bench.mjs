@@ -34,7 +34,9 @@ async function waitForHealth(base) {
   for (let i = 0; i < 900; i++) {
     try {
       if ((await fetch(`${base}/api/health`)).ok) return;
-    } catch {}
+    } catch {
+      // not listening yet
+    }
     await new Promise((r) => setTimeout(r, 100));
   }
   throw new Error('the server did not become healthy');

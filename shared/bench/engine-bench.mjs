@@ -113,16 +113,14 @@ let worst = 0;
 for (let i = 0; i < POINTS; i++) worst = Math.max(worst, Math.abs(check.id[i] - id[i]) / id[i], Math.abs(check.gmId[i] - gmId[i]) / gmId[i]);
 
 // 1 and 2, interleaved so that both see the same machine.
-let engineRate = 0;
-let bareRate = 0;
 const engineRates = [];
 const bareRates = [];
 for (let pass = 0; pass < 3; pass++) {
   engineRates.push(rate(() => sweep(request, process_), POINTS));
   bareRates.push(rate(bareLoop, POINTS));
 }
-engineRate = Math.max(...engineRates);
-bareRate = Math.max(...bareRates);
+const engineRate = Math.max(...engineRates);
+const bareRate = Math.max(...bareRates);
 const apiShapeRate = rate(() => computeSweep(request, process_), POINTS);
 
 // 3 and 4: ngspice, level 1, the same device (its square law has no subthreshold tail, but the cost per point is what counts).

@@ -1,8 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { z } from 'zod';
-import { BF180G, computeCorners, computeSize, computeSweep } from '../src/device/index.js';
+import { BF180G, checkRequestAgainstProcess, computeCorners, computeSize, computeSweep } from '../src/device/index.js';
 import {
-  checkRequestAgainstProcess,
   cornersRequestSchema,
   cornersResponseSchema,
   sizeRequestSchema,

@@ -1,4 +1,6 @@
 import { render } from '@testing-library/react';
+import type { QueryClient } from '@tanstack/react-query';
+import type { ReactNode } from 'react';
 import userEvent from '@testing-library/user-event';
 import { createMemoryRouter, RouterProvider } from 'react-router-dom';
 import { AppProviders } from '../app/providers';
@@ -22,4 +24,13 @@ export function renderApp(path: string, { token }: RenderAppOptions = {}) {
     </AppProviders>,
   );
   return { ...view, router, queryClient, user: userEvent.setup() };
+}
+
+/** Renders one component inside the app's providers (theme, query client, notifications) with a given query client. */
+export function renderWithProviders(ui: ReactNode, queryClient: QueryClient) {
+  return render(
+    <AppProviders queryClient={queryClient} env="test">
+      {ui}
+    </AppProviders>,
+  );
 }

@@ -15,7 +15,7 @@ import { RevisionEntity } from '../revisions/revision.entity.js';
 import { UserEntity } from '../users/user.entity.js';
 import { decisionNotice, reviewRequestedNotice, withdrawnNotice, type ReviewFacts } from './review-notices.js';
 import { ReviewRequestReader } from './review-request-reader.js';
-import { toReviewRequest, type LoadedReviewRequest } from './review-request-response.js';
+import { toReviewRequest } from './review-request-response.js';
 import { ReviewRequestEntity } from './review-request.entity.js';
 
 /**

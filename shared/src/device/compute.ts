@@ -6,18 +6,18 @@ import {
   type SweepPoint,
   type SweepRequestInput,
   type SweepResponse,
-  checkRequestAgainstProcess,
   cornersRequestSchema,
   fieldOfIssue,
-  parseOrThrow,
   sizeRequestSchema,
   sweepRequestSchema,
 } from '../schemas/compute.js';
 import { type Polarity, type Process, processSchema } from '../schemas/process.js';
+import { checkRequestAgainstProcess } from './check-request.js';
 import { cornerAnalysis } from './corners.js';
 import type { CurrentModel } from './drain-current.js';
 import { ENGINE_VERSION } from './engine-version.js';
 import { EngineError, isEngineError } from './errors.js';
+import { parseOrThrow } from './parse-request.js';
 import { prepareDevice } from './resolve-device.js';
 import { regionOf } from './small-signal.js';
 import { type Sizing, solveSize } from './solve.js';

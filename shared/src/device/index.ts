@@ -7,6 +7,8 @@ export { EngineError, isEngineError } from './errors.js';
 
 // The three calls of the compute API (parse, check against the process, compute).
 export { computeSize, computeSweep, computeCorners } from './compute.js';
+export { checkRequestAgainstProcess } from './check-request.js';
+export { parseOrThrow } from './parse-request.js';
 
 // Devices of a process at a corner and temperature.
 export { type PreparedDevice, prepareDevice, deviceParamsOf, cornerShiftOf, thresholdAt } from './resolve-device.js';

@@ -1,7 +1,5 @@
 import { z } from 'zod';
-import { EngineError } from '../device/errors.js';
-import { cornerShiftOf, deviceParamsOf } from '../device/resolve-device.js';
-import { type Process, polaritySchema, processSchema } from './process.js';
+import { polaritySchema, processSchema } from './process.js';
 
 /**
  * Request and response schemas of the compute API: POST /api/compute/size, /sweep and /corners.
@@ -242,35 +240,9 @@ export type CornersRequestInput = z.input<typeof cornersRequestSchema>;
 
 export type ComputeRequest = SizeRequest | SweepRequest | CornersRequest;
 
-/**
- * Checks what needs the process: corner names (field "corner" or "corners.<i>"), the flavour and its
- * polarity, VSB above −2φF, L at least lmin. Throws EngineError with the field.
- */
-export function checkRequestAgainstProcess(request: ComputeRequest, process: Process): void {
-  const params = deviceParamsOf(process, request.polarity, request.flavour);
-  if ('corner' in request && request.corner !== undefined) cornerShiftOf(process, request.polarity, request.corner, 'corner');
-  const corners = 'corners' in request ? request.corners : undefined;
-  corners?.forEach((name, index) => cornerShiftOf(process, request.polarity, name, `corners.${index}`));
-  if (!(request.vsb > -params.twoPhiF)) {
-    throw new EngineError('VSB_BEYOND_FORWARD_LIMIT', `vsb = ${request.vsb} V is at or beyond −2φF = ${-params.twoPhiF} V: the source–body junction is forward-biased past where the model has an answer`, 'vsb');
-  }
-  if (request.l < params.lmin) {
-    throw new EngineError('L_BELOW_LMIN', `l = ${request.l} m is below the process minimum lmin = ${params.lmin} m`, 'l');
-  }
-}
-
 /** The field of a zod issue as the API names it: its path joined with dots ("sweep.points"), or undefined for the whole body. */
 export function fieldOfIssue(issue: { path: readonly PropertyKey[] }): string | undefined {
   return issue.path.length ? issue.path.map(String).join('.') : undefined;
-}
-
-/** Parses with a schema; on failure throws EngineError VALIDATION_FAILED naming the first issue's field. */
-export function parseOrThrow<T extends z.ZodType>(schema: T, value: unknown): z.infer<T> {
-  const result = schema.safeParse(value);
-  if (result.success) return result.data;
-  const issue = result.error.issues[0];
-  const field = fieldOfIssue(issue);
-  throw new EngineError('VALIDATION_FAILED', issue.message, field);
 }
 
 // ---- responses ----

@@ -7,7 +7,7 @@ import { ThrottlerGuard } from '@nestjs/throttler';
  */
 @Injectable()
 export class LoginThrottlerGuard extends ThrottlerGuard {
-  protected override async getTracker(request: Record<string, any>): Promise<string> {
+  protected override async getTracker(request: { body?: { email?: unknown }; ip?: string }): Promise<string> {
     const email: unknown = request.body?.email;
     if (typeof email === 'string' && email.trim() !== '') return `email:${email.trim().toLowerCase()}`;
     return `ip:${request.ip}`;

@@ -16,7 +16,7 @@ export function NewProjectDialog({ opened, onClose }: { opened: boolean; onClose
     validate: schemaResolver(createProjectRequestSchema, { sync: true }),
   });
   const submit = form.onSubmit((values) =>
-    create.mutate(createProjectRequestSchema.parse(values), { onSuccess: (project) => navigate(`/projects/${project.id}`) }),
+    create.mutate(createProjectRequestSchema.parse(values), { onSuccess: (project) => void navigate(`/projects/${project.id}`) }),
   );
   return (
     <Modal opened={opened} onClose={onClose} title="New project" size="md">

@@ -45,9 +45,11 @@ export function ProcessEditorForm({ initialValues, baseVersion, pending, error, 
   });
 
   // A field the server refused (400 VALIDATION_FAILED, 409 PROCESS_NAME_TAKEN) shows beside that field.
+  // setFieldError is stable across renders (a useCallback inside @mantine/form).
+  const { setFieldError } = form;
   useEffect(() => {
-    if (isApiError(error) && error.field?.startsWith('definition.')) form.setFieldError(error.field.slice('definition.'.length), error.message);
-  }, [error]);
+    if (isApiError(error) && error.field?.startsWith('definition.')) setFieldError(error.field.slice('definition.'.length), error.message);
+  }, [error, setFieldError]);
 
   const submit = form.onSubmit((values) => {
     const result = checkProcessForm(values);

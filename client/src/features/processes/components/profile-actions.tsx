@@ -61,7 +61,7 @@ export function ProfileActions({ profile, maintainer, onImport }: ProfileActions
                 leftSection={<IconTrash size={14} />}
                 onClick={() => {
                   if (window.confirm(`Delete ${profile.name} with all its versions? This cannot be undone.`)) {
-                    remove.mutate(profile.id, { onSuccess: () => navigate('/processes') });
+                    remove.mutate(profile.id, { onSuccess: () => void navigate('/processes') });
                   }
                 }}
               >

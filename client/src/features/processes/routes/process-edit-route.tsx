@@ -46,7 +46,7 @@ export default function ProcessEditRoute() {
         onSave={({ definition, nodeClass, message }) =>
           update.mutate(
             { id, request: { baseVersion: data.version.number, definition, nodeClass, message } },
-            { onSuccess: () => navigate(`/processes/${id}`) },
+            { onSuccess: () => void navigate(`/processes/${id}`) },
           )
         }
       />

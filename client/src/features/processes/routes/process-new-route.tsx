@@ -31,7 +31,7 @@ export default function ProcessNewRoute() {
         error={create.error}
         onCancel={() => navigate('/processes')}
         onSave={({ definition, nodeClass, message }) =>
-          create.mutate({ definition, nodeClass, message }, { onSuccess: (profile) => navigate(`/processes/${profile.id}`) })
+          create.mutate({ definition, nodeClass, message }, { onSuccess: (profile) => void navigate(`/processes/${profile.id}`) })
         }
       />
     </>

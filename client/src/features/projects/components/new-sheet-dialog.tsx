@@ -67,7 +67,7 @@ export function NewSheetDialog({ projectId, opened, onClose }: { projectId: stri
     create.mutate(
       { projectId, request },
       {
-        onSuccess: (sheet) => navigate(`/sheets/${sheet.id}`),
+        onSuccess: (sheet) => void navigate(`/sheets/${sheet.id}`),
         onError: (error) => {
           if (isApiError(error) && error.field) form.setFieldError(error.field, error.message);
         },

@@ -1,13 +1,13 @@
 import type { SheetReviewState } from '@channelwright/shared/schemas';
-import { render, screen, within } from '@testing-library/react';
+import { screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { MemoryRouter } from 'react-router-dom';
 import { describe, expect, it } from 'vitest';
-import { AppProviders } from '../../../app/providers';
 import { createQueryClient } from '../../../lib/query-client';
 import { setAuthToken } from '../../../lib/session/auth-token';
 import { currentUserQueryOptions } from '../../../lib/session/current-user';
 import { errorBody, installFakeApi } from '../../../test/fake-api';
+import { renderWithProviders } from '../../../test/render-app';
 import { designer, reviewer } from '../../../test/fixtures';
 import { project, reviewRequest, revision } from '../testing/revision-fixtures';
 import { RevisionPanel } from './revision-panel';
@@ -30,12 +30,11 @@ function renderPanel() {
   setAuthToken('token-ines');
   const queryClient = createQueryClient();
   queryClient.setQueryData(currentUserQueryOptions().queryKey, designer);
-  render(
-    <AppProviders queryClient={queryClient} env="test">
-      <MemoryRouter>
-        <RevisionPanel sheetId="s-amp" sheetName="Two-stage amplifier" />
-      </MemoryRouter>
-    </AppProviders>,
+  renderWithProviders(
+    <MemoryRouter>
+      <RevisionPanel sheetId="s-amp" sheetName="Two-stage amplifier" />
+    </MemoryRouter>,
+    queryClient,
   );
   return userEvent.setup();
 }

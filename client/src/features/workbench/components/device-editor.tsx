@@ -45,7 +45,7 @@ export function DeviceEditor({ sheet, process, device, initial, editable, reload
   };
   const saver = useSaveDevice(sheet.id, device?.id, (saved) => {
     notifications.show({ color: 'channel', message: `${saved.targets.name} saved${saved.result ? '' : ', but the engine could not size it'}` });
-    if (!device) navigate(`/sheets/${sheet.id}/devices/${saved.id}`, { replace: true });
+    if (!device) void navigate(`/sheets/${sheet.id}/devices/${saved.id}`, { replace: true });
     else reset(saved);
   });
 
