@@ -1,13 +1,17 @@
-import { apiErrorBodySchema, type ApiErrorBody, type Problem } from '@channelwright/shared/schemas';
+import { apiErrorBodySchema, type ApiErrorBody, type ErrorCode, type Problem } from '@channelwright/shared/schemas';
+import type { ClientErrorCode } from './error-titles';
+
+/** The body of a failure as the client holds it: the server's, or one the client made up for a missing answer. */
+type ClientErrorBody = Omit<ApiErrorBody, 'code'> & { code: ErrorCode | ClientErrorCode };
 
 /** A failed API call, carrying the server's error body (or a stand-in when there was none). */
 export class ApiError extends Error {
   readonly status: number;
-  readonly code: string;
+  readonly code: ErrorCode | ClientErrorCode;
   readonly field?: string;
   readonly problems?: Problem[];
 
-  constructor(body: ApiErrorBody) {
+  constructor(body: ClientErrorBody) {
     super(body.message);
     this.name = 'ApiError';
     this.status = body.statusCode;

@@ -1,19 +1,11 @@
 import { notifications } from '@mantine/notifications';
 import type { ApiError } from './api-error';
+import { ERROR_TITLES } from './error-titles';
 
-const TITLES: Record<number, string> = {
-  0: 'No connection',
-  400: 'Check your input',
-  401: 'Signed out',
-  403: 'Not allowed',
-  404: 'Not found',
-  409: 'Changed by someone else',
-  413: 'Too large',
-  429: 'Too many attempts',
-};
-
-function titleFor(status: number): string {
-  return TITLES[status] ?? (status >= 500 ? 'Server error' : 'Request failed');
+/** The code's title; an answer the client could not read says at least whether the server failed. */
+function titleFor(error: ApiError): string {
+  if (error.code === 'UNEXPECTED_RESPONSE' && error.status >= 500) return ERROR_TITLES.INTERNAL_ERROR;
+  return ERROR_TITLES[error.code];
 }
 
 const MAX_PROBLEMS_SHOWN = 3;
@@ -36,7 +28,7 @@ export function notifyApiError(error: ApiError): void {
   notifications.show({
     id,
     color: 'red',
-    title: titleFor(error.status),
+    title: titleFor(error),
     message: describeApiError(error),
     autoClose: error.status >= 500 || error.status === 0 ? false : 8000,
     style: { whiteSpace: 'pre-line' },

@@ -1,5 +1,5 @@
 import { computeSize, ENGINE_VERSION, isEngineError } from '@channelwright/shared/device';
-import type { DeviceComputeError, DeviceResult, DeviceTargets } from '@channelwright/shared/schemas';
+import { isErrorCode, type DeviceComputeError, type DeviceResult, type DeviceTargets, type ErrorCode } from '@channelwright/shared/schemas';
 import { DomainError } from '../common/errors/domain-error.js';
 import type { ResolvedProcess } from '../processes/processes.service.js';
 import { sizeRequestOf } from './device-targets.js';
@@ -20,7 +20,7 @@ export interface DeviceComputation {
  * edit they answer 400 (nothing stored). Every other EngineError is a target the engine cannot meet,
  * stored with the device so the designer sees why.
  */
-const BAD_REFERENCE_CODES = new Set(['VALIDATION_FAILED', 'UNKNOWN_CORNER', 'UNKNOWN_FLAVOUR', 'FLAVOUR_POLARITY_MISMATCH']);
+const BAD_REFERENCE_CODES = new Set<ErrorCode>(['VALIDATION_FAILED', 'UNKNOWN_CORNER', 'UNKNOWN_FLAVOUR', 'FLAVOUR_POLARITY_MISMATCH']);
 
 /** Sizes a device with the engine on the sheet's process version (defaults from the sheet). */
 export function computeDevice(targets: DeviceTargets, sheet: Pick<SheetEntity, 'temperature' | 'corner' | 'model'>, process: ResolvedProcess): DeviceComputation {
@@ -37,7 +37,7 @@ export function computeDevice(targets: DeviceTargets, sheet: Pick<SheetEntity, '
 /** On create and edit: 400 naming the field when the targets refer to a corner or flavour the process lacks. */
 export function assertKnownToProcess(computation: DeviceComputation): void {
   const { error } = computation;
-  if (error && BAD_REFERENCE_CODES.has(error.code)) throw new DomainError(error.code, error.message, 400, error.field);
+  if (error && isErrorCode(error.code) && BAD_REFERENCE_CODES.has(error.code)) throw new DomainError(error.code, error.message, 400, error.field);
 }
 
 /** The columns of a device row that hold a computation. */

@@ -1,13 +1,15 @@
+import type { ErrorCode } from '../schemas/error-codes.js';
+
 /**
  * The engine's one way of saying "no physical answer": a stable string code for programs,
  * a plain sentence for people, and the input field that caused it when there is one.
  * The server maps it to a 400 with the shared error body; the engine never returns NaN instead.
  */
 export class EngineError extends Error {
-  readonly code: string;
+  readonly code: ErrorCode;
   readonly field?: string;
 
-  constructor(code: string, message: string, field?: string) {
+  constructor(code: ErrorCode, message: string, field?: string) {
     super(message);
     this.name = 'EngineError';
     this.code = code;

@@ -25,31 +25,6 @@ export const WARNING_CODES = [
 ] as const;
 export type WarningCode = (typeof WARNING_CODES)[number];
 
-/** Codes of the EngineErrors the engine throws (besides VALIDATION_FAILED from the schemas). */
-export const ENGINE_ERROR_CODES = [
-  'VALIDATION_FAILED',
-  'PROCESS_REQUIRED',
-  'PROCESS_INVALID',
-  'UNKNOWN_CORNER',
-  'UNKNOWN_FLAVOUR',
-  'FLAVOUR_POLARITY_MISMATCH',
-  'TEMPERATURES_WITH_TEMPERATURE_SWEEP',
-  'L_BELOW_LMIN',
-  'W_BELOW_WMIN',
-  'W_TOO_LARGE',
-  'FINGER_WIDTH_BELOW_WMIN',
-  'VSB_BEYOND_FORWARD_LIMIT',
-  'TEMPERATURE_BELOW_ABSOLUTE_ZERO',
-  'GM_ID_ABOVE_WEAK_INVERSION_LIMIT',
-  'GM_ID_NOT_REACHABLE',
-  'GM_ID_TOO_LOW',
-  'ID_NOT_REACHABLE_BELOW_VDD',
-  'SOLVER_DID_NOT_CONVERGE',
-  'ZTC_NOT_FOUND',
-] as const;
-export type EngineErrorCode = (typeof ENGINE_ERROR_CODES)[number];
-
-
 export const warningSchema = z.object({
   code: z.enum(WARNING_CODES),
   message: z.string(),

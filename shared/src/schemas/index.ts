@@ -1,4 +1,5 @@
 export * from './api-error.js';
+export * from './error-codes.js';
 export * from './roles.js';
 export * from './auth.js';
 export * from './process.js';

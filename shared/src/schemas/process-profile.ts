@@ -7,21 +7,6 @@ import { processSchema } from './process.js';
  * (`processSchema`). Numbers in SI units, temperatures in °C, dates as ISO 8601 text.
  */
 
-/** Codes the library answers with, besides the common ones (VALIDATION_FAILED, FORBIDDEN …). */
-export const PROCESS_ERROR_CODES = [
-  'PROCESS_NOT_FOUND',
-  'PROCESS_VERSION_NOT_FOUND',
-  'PROCESS_NAME_TAKEN',
-  'PROCESS_IN_USE',
-  'NOT_PROCESS_MAINTAINER',
-  'STALE_EDIT',
-  'NO_CHANGES',
-  'IMPORT_INVALID',
-  'FILE_REQUIRED',
-  'PAYLOAD_TOO_LARGE',
-] as const;
-export type ProcessErrorCode = (typeof PROCESS_ERROR_CODES)[number];
-
 /** Largest file POST /api/processes/import accepts; a bigger one answers 413 PAYLOAD_TOO_LARGE. */
 export const PROCESS_IMPORT_MAX_BYTES = 1024 * 1024;
 

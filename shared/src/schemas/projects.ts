@@ -11,17 +11,6 @@ import { projectRoleSchema } from './roles.js';
  * Dates are ISO 8601 text.
  */
 
-/** Codes the project routes answer with, besides the common ones (VALIDATION_FAILED, FORBIDDEN, STALE_EDIT …). */
-export const PROJECT_ERROR_CODES = [
-  'PROJECT_NOT_FOUND',
-  'MEMBER_NOT_FOUND',
-  'USER_NOT_FOUND',
-  'MEMBER_EXISTS',
-  'LAST_OWNER',
-  'STALE_EDIT',
-] as const;
-export type ProjectErrorCode = (typeof PROJECT_ERROR_CODES)[number];
-
 /** The optimistic-concurrency version of a row in a body: the version the client edited. */
 export const editedVersionSchema = z
   .number({ error: 'version must be a whole number' })

@@ -9,24 +9,6 @@ import { revisionStateSchema, revisionSummarySchema } from './revisions.js';
  * signs the revision off; a decision is final for its request; a withdrawn request cannot be decided.
  */
 
-export const REVIEW_ERROR_CODES = [
-  'REVIEW_REQUEST_NOT_FOUND',
-  'SELF_REVIEW',
-  'REVIEWER_NOT_ELIGIBLE',
-  'NOT_ASSIGNED_REVIEWER',
-  'NOT_REQUEST_AUTHOR',
-  'REVIEW_ALREADY_OPEN',
-  'REVIEW_ALREADY_DECIDED',
-  'REVIEW_WITHDRAWN',
-  'REVISION_SIGNED_OFF',
-  'REVISION_SUPERSEDED',
-  'REVISION_CHANGES_REQUESTED',
-  'REVISION_HASH_MISMATCH',
-  'DEVICE_NOT_IN_REVISION',
-  'COMMENT_NOT_ALLOWED',
-] as const;
-export type ReviewErrorCode = (typeof REVIEW_ERROR_CODES)[number];
-
 export const REVIEW_REQUEST_STATES = ['open', 'approved', 'changes-requested', 'withdrawn'] as const;
 export const reviewRequestStateSchema = z.enum(REVIEW_REQUEST_STATES);
 export type ReviewRequestState = z.infer<typeof reviewRequestStateSchema>;

@@ -9,16 +9,6 @@ import { deviceComputeErrorSchema, deviceResultSchema, deviceTargetsSchema } fro
  * A revision never changes; its review state comes from its review requests (see reviews.ts).
  */
 
-export const REVISION_ERROR_CODES = [
-  'REVISION_NOT_FOUND',
-  'REVISION_SIGNED_OFF',
-  'REVISION_IMMUTABLE',
-  'REVISION_OTHER_SHEET',
-  'SHEET_HAS_NO_DEVICES',
-  'SHEET_RESULTS_STALE',
-] as const;
-export type RevisionErrorCode = (typeof REVISION_ERROR_CODES)[number];
-
 /** draft: frozen, not (or no longer) in review; in-review: a request is open; signed-off: approved (final). */
 export const REVISION_STATES = ['draft', 'in-review', 'changes-requested', 'signed-off'] as const;
 export const revisionStateSchema = z.enum(REVISION_STATES);

@@ -17,20 +17,6 @@ import { editedVersionSchema } from './projects.js';
  * so the designer sees why on the sheet.
  */
 
-/** Codes the sheet routes answer with, besides the common ones and the engine's. */
-export const SHEET_ERROR_CODES = [
-  'SHEET_NOT_FOUND',
-  'DEVICE_NOT_FOUND',
-  'DEVICE_NAME_TAKEN',
-  'UNKNOWN_CORNER',
-  'UNKNOWN_FLAVOUR',
-  'FLAVOUR_POLARITY_MISMATCH',
-  'PROCESS_NOT_FOUND',
-  'PROCESS_VERSION_NOT_FOUND',
-  'STALE_EDIT',
-] as const;
-export type SheetErrorCode = (typeof SHEET_ERROR_CODES)[number];
-
 const size = sizeRequestSchema.shape;
 
 const text = (field: string, max: number) =>

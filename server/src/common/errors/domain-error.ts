@@ -1,4 +1,4 @@
-import type { Problem } from '@channelwright/shared/schemas';
+import type { ErrorCode, Problem } from '@channelwright/shared/schemas';
 
 /**
  * A rule of the product said no. Services throw it with a stable string code; the one exception
@@ -6,7 +6,7 @@ import type { Problem } from '@channelwright/shared/schemas';
  */
 export class DomainError extends Error {
   constructor(
-    readonly code: string,
+    readonly code: ErrorCode,
     message: string,
     readonly status = 400,
     readonly field?: string,
@@ -17,8 +17,8 @@ export class DomainError extends Error {
   }
 }
 
-export const badRequest = (code: string, message: string, field?: string) => new DomainError(code, message, 400, field);
-export const unauthorized = (code: string, message: string) => new DomainError(code, message, 401);
-export const forbidden = (code: string, message: string) => new DomainError(code, message, 403);
-export const notFound = (code: string, message: string) => new DomainError(code, message, 404);
-export const conflict = (code: string, message: string, field?: string) => new DomainError(code, message, 409, field);
+export const badRequest = (code: ErrorCode, message: string, field?: string) => new DomainError(code, message, 400, field);
+export const unauthorized = (code: ErrorCode, message: string) => new DomainError(code, message, 401);
+export const forbidden = (code: ErrorCode, message: string) => new DomainError(code, message, 403);
+export const notFound = (code: ErrorCode, message: string) => new DomainError(code, message, 404);
+export const conflict = (code: ErrorCode, message: string, field?: string) => new DomainError(code, message, 409, field);

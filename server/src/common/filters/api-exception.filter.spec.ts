@@ -45,7 +45,7 @@ describe('toApiErrorBody', () => {
     expect(toApiErrorBody(new NotFoundException('Cannot GET /api/x')).code).toBe('ROUTE_NOT_FOUND');
     expect(toApiErrorBody(new PayloadTooLargeException()).code).toBe('PAYLOAD_TOO_LARGE');
     expect(toApiErrorBody(new ThrottlerException()).code).toBe('TOO_MANY_REQUESTS');
-    expect(toApiErrorBody(new HttpException('Gone', 410))).toMatchObject({ statusCode: 410, code: 'HTTP_410' });
+    expect(toApiErrorBody(new HttpException('Gone', 410))).toMatchObject({ statusCode: 410, code: 'REQUEST_REFUSED' });
   });
 
   it('answers anything unexpected with 500 INTERNAL_ERROR and none of its details', () => {

@@ -1,4 +1,4 @@
-import type { ApiErrorBody, CommonErrorCode } from '@channelwright/shared/schemas';
+import type { ApiErrorBody, ErrorCode } from '@channelwright/shared/schemas';
 import { isEngineError } from '@channelwright/shared/device';
 import { Catch, HttpException, Logger, type ArgumentsHost, type ExceptionFilter } from '@nestjs/common';
 import type { Response } from 'express';
@@ -7,7 +7,7 @@ import { DomainError } from '../errors/domain-error.js';
 import { validationError } from '../validation/zod-issues.js';
 
 /** Codes for the HTTP exceptions Nest and its add-ons raise themselves (our own code throws DomainError). */
-const CODE_BY_STATUS: Partial<Record<number, CommonErrorCode>> = {
+const CODE_BY_STATUS: Partial<Record<number, ErrorCode>> = {
   400: 'VALIDATION_FAILED',
   401: 'UNAUTHENTICATED',
   403: 'FORBIDDEN',
@@ -50,7 +50,8 @@ export function toApiErrorBody(exception: unknown): ApiErrorBody {
     if (status >= 500) return INTERNAL_ERROR;
     return {
       statusCode: status,
-      code: CODE_BY_STATUS[status] ?? `HTTP_${status}`,
+      // Any other 4xx Nest raises (405, 410…) keeps its status under one listed code.
+      code: CODE_BY_STATUS[status] ?? 'REQUEST_REFUSED',
       message: MESSAGE_BY_STATUS[status] ?? exception.message,
     };
   }
