@@ -11,7 +11,7 @@ import type { Polarity, Process, SizeRequestInput, SizeResponse } from '../src/s
  * 285–289, 1968, as implemented in src/spicelib/devices/mos1 (mos1load.c: saturation
  * ID = KP/2·W/L·(VGS−VT)²·(1+λVDS), gds = λ·KP/2·W/L·(VGS−VT)², gmbs = gm·γ/(2√(PHI+VSB));
  * mos1temp.c: KP(T) = KP·(T/TNOM)^−1.5). All devices of a check run in ONE batch simulation.
- * Pitfalls followed (shared/reference/ngspice.md): is=0 so no drain-diode current is added to @m[id],
+ * Pitfalls of ngspice followed (from its source and manual, ngspice-39, 2023): is=0 so no drain-diode current is added to @m[id],
  * gmin and abstol tightened, num_threads=1, exit status 1 after .control is normal, PMOS reported
  * n-normalised (@m[id] > 0, @m[von] signed), λ set per device because level 1 has no length scaling.
  */

@@ -34,13 +34,12 @@ describe('processSchema', () => {
   it('accepts a value outside the plausible range but within the hard limits (the editor warns about it)', () => {
     const kp = DEVICE_PARAMETERS.find((p) => p.name === 'kp');
     const unusual = 3e-3; // above the plausible 2 mA/V², a possible but unusual kp
-    expect(unusual).toBeGreaterThan(kp?.max as number);
+    expect(unusual).toBeGreaterThan(kp?.plausible.max as number);
     expect(processSchema.safeParse({ ...BF180G, nmos: { ...BF180G.nmos, kp: unusual } }).success).toBe(true);
     // Every hard limit contains the plausible range it stands behind.
     for (const info of DEVICE_PARAMETERS) {
-      const limit = (info as { limit?: { min: number; max: number } }).limit ?? info;
-      expect(limit.min, info.name).toBeLessThanOrEqual(info.min);
-      expect(limit.max, info.name).toBeGreaterThanOrEqual(info.max);
+      expect(info.hardLimit.min, info.name).toBeLessThanOrEqual(info.plausible.min);
+      expect(info.hardLimit.max, info.name).toBeGreaterThanOrEqual(info.plausible.max);
     }
   });
 
@@ -61,15 +60,15 @@ describe('parameter table', () => {
     expect(DEVICE_PARAMETERS.map((p) => p.name).sort()).toEqual(keys);
     for (const info of [...DEVICE_PARAMETERS, ...PROCESS_FIELDS]) {
       expect(info.description.length).toBeGreaterThan(10);
-      expect(info.min).toBeLessThan(info.max);
+      expect(info.plausible.min).toBeLessThan(info.plausible.max);
     }
   });
 
   it('gives the plausible ranges of the issue: vt0 −1 … 1.5 V, kp 10 µA/V² … 2 mA/V², γ 0 … 1.5 √V', () => {
     const range = (name: string) => DEVICE_PARAMETERS.find((p) => p.name === name);
-    expect(range('vt0')).toMatchObject({ unit: 'V', min: -1, max: 1.5 });
-    expect(range('kp')).toMatchObject({ unit: 'A/V²', min: 10e-6, max: 2e-3 });
-    expect(range('gamma')).toMatchObject({ unit: '√V', min: 0, max: 1.5 });
+    expect(range('vt0')).toMatchObject({ unit: 'V', plausible: { min: -1, max: 1.5 } });
+    expect(range('kp')).toMatchObject({ unit: 'A/V²', plausible: { min: 10e-6, max: 2e-3 } });
+    expect(range('gamma')).toMatchObject({ unit: '√V', plausible: { min: 0, max: 1.5 } });
   });
 
   it('has units and display units that the units parser reads, so the editor can convert what is typed', () => {

@@ -6,7 +6,8 @@ const params = { vt0: 0.45, gamma: 0.45, twoPhiF: 0.88, vtTc: -1e-3 };
 const tnomK = 300.15;
 
 // The body-effect law VT = VT0 + γ(√(2φF + VSB) − √(2φF)): Tsividis & McAndrew, Operation and Modeling of the
-// MOS Transistor, 3rd ed., 2011, ch. 4; the same as SPICE level 1 for VSB ≥ 0 (shared/reference/ngspice.md).
+// MOS Transistor, 3rd ed., 2011, ch. 4; the same as SPICE level 1 for VSB ≥ 0
+// (ngspice-39 source, src/spicelib/devices/mos1/mos1load.c, 2023).
 describe('thresholdVoltage', () => {
   it('VSB = 0 at tnom gives vt0 exactly (common practice, no source)', () => {
     expect(thresholdVoltage(params, 0, tnomK, tnomK)).toBe(0.45);

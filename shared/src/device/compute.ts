@@ -1,16 +1,7 @@
-import {
-  type CornersRequestInput,
-  type CornersResponse,
-  type SizeRequestInput,
-  type SizeResponse,
-  type SweepPoint,
-  type SweepRequestInput,
-  type SweepResponse,
-  cornersRequestSchema,
-  fieldOfIssue,
-  sizeRequestSchema,
-  sweepRequestSchema,
-} from '../schemas/compute.js';
+import { type CornersRequestInput, type CornersResponse, cornersRequestSchema } from '../schemas/corners.js';
+import { fieldOfIssue } from '../schemas/field-of-issue.js';
+import { type SizeRequestInput, type SizeResponse, sizeRequestSchema } from '../schemas/size.js';
+import { type SweepPoint, type SweepRequestInput, type SweepResponse, sweepRequestSchema } from '../schemas/sweep.js';
 import { type Polarity, type Process, processSchema } from '../schemas/process.js';
 import { checkRequestAgainstProcess } from './check-request.js';
 import { cornerAnalysis } from './corners.js';

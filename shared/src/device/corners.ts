@@ -1,4 +1,5 @@
-import { CORNER_FIGURES, type CornerFigure, type CornersRequest, type CornersResponse, WORSE_DIRECTION, type Warning } from '../schemas/compute.js';
+import { CORNER_FIGURES, type CornerFigure, type CornersRequest, type CornersResponse, WORSE_DIRECTION } from '../schemas/corners.js';
+import type { Warning } from '../schemas/warning.js';
 import { type Process, cornerNames } from '../schemas/process.js';
 import { lambdaAtLength } from './channel-length-modulation.js';
 import { EngineError, isEngineError } from './errors.js';

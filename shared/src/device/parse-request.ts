@@ -1,5 +1,5 @@
 import type { z } from 'zod';
-import { fieldOfIssue } from '../schemas/compute.js';
+import { fieldOfIssue } from '../schemas/field-of-issue.js';
 import { EngineError } from './errors.js';
 
 /** Parses with a schema; on failure throws EngineError VALIDATION_FAILED naming the first issue's field. */

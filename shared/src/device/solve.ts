@@ -7,7 +7,7 @@ import { type PreparedDevice, thresholdAt } from './resolve-device.js';
 import { say } from './say.js';
 import { slopeFactor } from './slope-factor.js';
 import { DEFAULT_MAX_FINGER_WIDTH, snapWidth } from './snap-width.js';
-import type { Warning } from '../schemas/compute.js';
+import type { Warning } from '../schemas/warning.js';
 import { operatingPointWarnings } from './warnings.js';
 
 /** Widths above this are refused as no circuit's, m (10 cm). */

@@ -1,4 +1,5 @@
-import type { SweepParam, Warning, WarningCode } from '../schemas/compute.js';
+import type { SweepParam } from '../schemas/sweep.js';
+import type { Warning, WarningCode } from '../schemas/warning.js';
 import { type CurrentModel, maskOf } from './drain-current.js';
 import { isEngineError } from './errors.js';
 import type { PreparedDevice } from './resolve-device.js';

@@ -1,4 +1,4 @@
-import type { SweepField } from '../schemas/compute.js';
+import type { SweepField } from '../schemas/sweep.js';
 import { gateDrainCapacitance, gateSourceCapacitance, transitFrequency } from './capacitance.js';
 import { ID, KERNEL_OUTPUTS, allRegionCurrentInto, maskOf } from './drain-current.js';
 import { pelgromPairSigma } from './mismatch.js';

@@ -1,4 +1,4 @@
-import type { SweepSpec } from '../schemas/compute.js';
+import type { SweepSpec } from '../schemas/sweep.js';
 
 /** The swept values: `points` values from `from` to `to`, evenly spaced (lin) or in a constant ratio (log); one point is `from`. */
 export function sweepValues(spec: Pick<SweepSpec, 'from' | 'to' | 'points' | 'scale'>): Float64Array {

@@ -1,4 +1,5 @@
-import { SWEEP_FIELDS, type SweepField, type SweepParam, type SweepRequest, type Warning } from '../schemas/compute.js';
+import { SWEEP_FIELDS, type SweepField, type SweepParam, type SweepRequest } from '../schemas/sweep.js';
+import type { Warning } from '../schemas/warning.js';
 import type { Process } from '../schemas/process.js';
 import { celsiusToKelvin } from '../units/temperature.js';
 import { lambdaAtLength } from './channel-length-modulation.js';

@@ -1,4 +1,4 @@
-import type { Warning, WarningCode } from '../schemas/compute.js';
+import type { Warning, WarningCode } from '../schemas/warning.js';
 import type { CurrentModel } from './drain-current.js';
 import type { OperatingPoint } from './operating-point.js';
 import { gmIdLimit } from './overdrive.js';

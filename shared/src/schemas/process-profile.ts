@@ -7,24 +7,21 @@ import { processSchema } from './process.js';
  * (`processSchema`). Numbers in SI units, temperatures in °C, dates as ISO 8601 text.
  */
 
-/** Largest file POST /api/processes/import accepts; a bigger one answers 413 PAYLOAD_TOO_LARGE. */
-export const PROCESS_IMPORT_MAX_BYTES = 1024 * 1024;
-
 /** A version number in a JSON body. */
 const versionNumber = (field: string) =>
   z.number({ error: `${field} must be a whole number` }).int(`${field} must be a whole number`).positive(`${field} must be at least 1`);
 
 /** A version number in a query string or a multipart text field, where everything arrives as text. */
-const versionNumberText = (field: string) =>
+export const versionNumberText = (field: string) =>
   z.coerce.number({ error: `${field} must be a whole number` }).int(`${field} must be a whole number`).positive(`${field} must be at least 1`);
 
-const nodeClassSchema = z
+export const nodeClassSchema = z
   .string({ error: 'nodeClass must be text' })
   .trim()
   .max(50, 'nodeClass must have at most 50 characters')
   .describe('The class of process, e.g. "180 nm"; free text');
 
-const messageSchema = z
+export const messageSchema = z
   .string({ error: 'message must be text' })
   .trim()
   .max(500, 'message must have at most 500 characters')
@@ -133,84 +130,3 @@ export const deprecateProcessRequestSchema = z.strictObject({
   deprecated: z.boolean({ error: 'deprecated must be true or false' }).default(true).describe('false restores a deprecated profile'),
 });
 export type DeprecateProcessRequest = z.infer<typeof deprecateProcessRequestSchema>;
-
-/**
- * The text fields of POST /api/processes/import (multipart, beside the `file`). With profileId and
- * baseVersion the file becomes a new version of that profile; without, a new profile.
- */
-export const importProcessFieldsSchema = z
-  .strictObject({
-    nodeClass: nodeClassSchema.optional(),
-    message: messageSchema.optional(),
-    profileId: z.string().trim().min(1, 'profileId must not be empty').optional(),
-    baseVersion: versionNumberText('baseVersion').optional(),
-  })
-  .superRefine((fields, ctx) => {
-    if ((fields.profileId === undefined) !== (fields.baseVersion === undefined)) {
-      ctx.addIssue({ code: 'custom', path: ['baseVersion'], message: 'profileId and baseVersion go together: give both to import a new version, neither for a new profile' });
-    }
-  });
-export type ImportProcessFields = z.infer<typeof importProcessFieldsSchema>;
-
-// ── the exchange file ──────────────────────────────────────────────────────────────────────────────
-
-export const PROCESS_FILE_FORMAT = 'channelwright-process';
-export const PROCESS_FILE_SCHEMA_VERSION = 1;
-
-/** Our own JSON file of one process version: what export writes and import reads. */
-export const processFileSchema = z
-  .strictObject({
-    format: z.literal(PROCESS_FILE_FORMAT, { error: `format must be "${PROCESS_FILE_FORMAT}"` }),
-    schemaVersion: z.literal(PROCESS_FILE_SCHEMA_VERSION, { error: `schemaVersion must be ${PROCESS_FILE_SCHEMA_VERSION}` }),
-    nodeClass: nodeClassSchema.optional(),
-    exportedAt: z.string().optional().describe('ISO 8601; informative'),
-    source: z.object({ profileId: z.string(), version: z.number().int() }).optional().describe('Where it was exported from; informative'),
-    process: processSchema,
-  })
-  .describe('A Channelwright process file (schemaVersion 1)');
-export type ProcessFile = z.infer<typeof processFileSchema>;
-
-/** The header of the CSV import, in this order. */
-export const PROCESS_CSV_COLUMNS = ['parameter', 'polarity', 'value', 'unit'] as const;
-
-// ── the physics helper ─────────────────────────────────────────────────────────────────────────────
-
-export const deriveProcessRequestSchema = z.strictObject({
-  tox: z.number({ error: 'tox must be a number in m' }).gt(0, 'tox must be above 0 m').max(1e-6, 'tox must be at most 1 µm').describe('Oxide thickness, m'),
-  substrateDoping: z
-    .number({ error: 'substrateDoping must be a number in m⁻³' })
-    .min(1e19, 'substrateDoping must be at least 1e19 m⁻³ (1e13 cm⁻³)')
-    .max(1e27, 'substrateDoping must be at most 1e27 m⁻³ (1e21 cm⁻³)')
-    .describe('Body doping NA (NMOS) or ND (PMOS) in m⁻³ — SI: 1e17 cm⁻³ is 1e23 m⁻³'),
-  flatBand: z.number({ error: 'flatBand must be a number in V' }).min(-3).max(3).optional().describe('Flat-band voltage, V, polarity-normalised; VT0 is derived only when given'),
-  mobility: z.number({ error: 'mobility must be a number in m²/(V·s)' }).gt(0).max(1).optional().describe('Channel mobility, m²/(V·s); kp = µ·Cox when given'),
-  temperature: z.number({ error: 'temperature must be a number in °C' }).min(-200).max(300).default(27).describe('°C'),
-});
-export type DeriveProcessRequest = z.infer<typeof deriveProcessRequestSchema>;
-export type DeriveProcessRequestInput = z.input<typeof deriveProcessRequestSchema>;
-
-export const physicalConstantSchema = z.object({
-  symbol: z.string(),
-  name: z.string(),
-  value: z.number(),
-  unit: z.string(),
-  source: z.string(),
-});
-export type PhysicalConstant = z.infer<typeof physicalConstantSchema>;
-
-export const deriveProcessResponseSchema = z.object({
-  cox: z.number().describe('F/m²'),
-  gamma: z.number().describe('√V'),
-  phiF: z.number().describe('V'),
-  twoPhiF: z.number().describe('V'),
-  n: z.number().describe('Slope factor at VSB = 0'),
-  depletionWidth: z.number().describe('m, at 2φF'),
-  ni: z.number().describe('m⁻³, at the temperature asked'),
-  vt0: z.number().optional().describe('V, only when flatBand was given'),
-  vtTc: z.number().optional().describe('V/K, only when flatBand was given'),
-  kp: z.number().optional().describe('A/V², only when mobility was given'),
-  temperature: z.number().describe('°C'),
-  equations: z.array(z.string()),
-  constants: z.array(physicalConstantSchema),
-});
-export type DeriveProcessResponse = z.infer<typeof deriveProcessResponseSchema>;

@@ -7,6 +7,13 @@ import { z } from 'zod';
  * vt0 < 0. All values in SI units (m, V, A, F), temperatures in °C.
  */
 
+/** An inclusive range of a parameter, in its SI unit; exclusiveMin makes the lower end strict (a positive quantity). */
+export interface ParameterRange {
+  readonly min: number;
+  readonly max: number;
+  readonly exclusiveMin?: boolean;
+}
+
 export interface ParameterInfo {
   /** The field name in the process JSON and the CSV import. */
   readonly name: string;
@@ -17,54 +24,53 @@ export interface ParameterInfo {
   /** The unit the editor shows, e.g. "µA/V²" for kp; the number stored is still in `unit`. */
   readonly displayUnit: string;
   readonly description: string;
-  /** Plausible range, inclusive, in `unit`: the editor warns outside it (a real process rarely goes there). */
-  readonly min: number;
-  readonly max: number;
-  /** When true, the value must be strictly above min (a positive quantity). */
-  readonly exclusiveMin?: boolean;
+  /** Where a real process's value lies: the editor warns outside it, the schema accepts it. */
+  readonly plausible: ParameterRange;
   /**
-   * Hard limits, inclusive, in `unit`: the schema refuses values outside them (no physical or usable
-   * answer, or a unit slip such as F/m² given as fF/µm²). The plausible range when absent.
+   * Beyond these the schema refuses the value (no physical or usable answer, or a unit slip such as F/m²
+   * given as fF/µm²). Always at least as wide as the plausible range.
    */
-  readonly limit?: { readonly min: number; readonly max: number; readonly exclusiveMin?: boolean };
+  readonly hardLimit: ParameterRange;
   readonly optional: boolean;
 }
 
-const p = (info: Omit<ParameterInfo, 'optional'> & { optional?: boolean }): ParameterInfo => ({ optional: false, ...info });
+type ParameterEntry = Omit<ParameterInfo, 'optional' | 'hardLimit'> & { optional?: boolean; hardLimit?: ParameterRange };
+/** A parameter whose hard limit is its plausible range unless a wider one is given. */
+const p = ({ hardLimit, ...info }: ParameterEntry): ParameterInfo => ({ optional: false, hardLimit: hardLimit ?? info.plausible, ...info });
 
 /** Every per-polarity device parameter, in the order the editor and the CSV list them. */
 export const DEVICE_PARAMETERS = [
-  p({ limit: { min: -5, max: 5 }, name: 'vt0', symbol: 'VT0', unit: 'V', displayUnit: 'V', min: -1, max: 1.5, description: 'Threshold voltage at VSB = 0 and tnom, polarity-normalised (−VTP for PMOS): > 0 enhancement, < 0 depletion mode' }),
-  p({ limit: { min: 0, max: 0.1, exclusiveMin: true }, name: 'kp', symbol: 'KP', unit: 'A/V²', displayUnit: 'µA/V²', min: 10e-6, max: 2e-3, description: 'Transconductance parameter µ0·Cox at tnom' }),
-  p({ limit: { min: 0, max: 5 }, name: 'gamma', symbol: 'γ', unit: '√V', displayUnit: '√V', min: 0, max: 1.5, description: 'Body-effect coefficient √(2·q·εSi·NA)/Cox' }),
-  p({ limit: { min: 0, max: 2, exclusiveMin: true }, name: 'twoPhiF', symbol: '2φF', unit: 'V', displayUnit: 'V', min: 0.3, max: 1.2, description: 'Surface potential in strong inversion, 2·UT·ln(NA/ni)' }),
-  p({ limit: { min: 0, max: 10 }, name: 'lambda', symbol: 'λ', unit: '1/V', displayUnit: '1/V', min: 0, max: 1, description: 'Channel-length modulation; with lRef, the value at L = lRef (λ(L) = lambda·lRef/L)' }),
-  p({ name: 'lRef', symbol: 'Lref', unit: 'm', displayUnit: 'µm', min: 10e-9, max: 100e-6, exclusiveMin: true, optional: true, description: 'Length at which lambda was measured; when given, λ scales as 1/L' }),
-  p({ limit: { min: 1, max: 10 }, name: 'n', symbol: 'n', unit: '', displayUnit: '', min: 1, max: 3, optional: true, description: 'Subthreshold slope factor; when absent, n = 1 + γ/(2·√(2φF + VSB))' }),
-  p({ limit: { min: 0, max: 1e-6, exclusiveMin: true }, name: 'tox', symbol: 'tox', unit: 'm', displayUnit: 'nm', min: 0.5e-9, max: 100e-9, description: 'Gate-oxide thickness (SiO2-equivalent)' }),
-  p({ limit: { min: 0, max: 1e-7 }, name: 'cgdo', symbol: 'CGDO', unit: 'F/m', displayUnit: 'fF/µm', min: 0, max: 2e-9, description: 'Gate–drain (and gate–source) overlap capacitance per width' }),
-  p({ limit: { min: 0, max: 1 }, name: 'cj', symbol: 'CJ', unit: 'F/m²', displayUnit: 'fF/µm²', min: 0, max: 1e-2, description: 'Zero-bias junction capacitance per area of the source/drain diffusion' }),
-  p({ limit: { min: 0, max: 1e-7 }, name: 'cjsw', symbol: 'CJSW', unit: 'F/m', displayUnit: 'fF/µm', min: 0, max: 1e-9, description: 'Zero-bias junction sidewall capacitance per perimeter' }),
-  p({ limit: { min: 0, max: 1e-3 }, name: 'ldiff', symbol: 'Ldiff', unit: 'm', displayUnit: 'µm', min: 0, max: 10e-6, description: 'Length of the source/drain diffusion (area = W·ldiff)' }),
-  p({ limit: { min: -0.05, max: 0.05 }, name: 'vtTc', symbol: 'dVT/dT', unit: 'V/K', displayUnit: 'mV/K', min: -5e-3, max: 0, description: 'Temperature coefficient of the threshold (polarity-normalised; negative: VT falls when hotter)' }),
-  p({ limit: { min: -5, max: 2 }, name: 'muExp', symbol: 'µ exponent', unit: '', displayUnit: '', min: -3, max: 0, description: 'Mobility temperature exponent: kp ∝ (T/Tnom)^muExp, T in kelvin (about −1.5)' }),
-  p({ limit: { min: 0, max: 1e-6 }, name: 'avt', symbol: 'AVT', unit: 'V·m', displayUnit: 'mV·µm', min: 0, max: 50e-9, description: 'Pelgrom threshold-matching coefficient: σ(ΔVT) of a pair = avt/√(W·L)' }),
-  p({ limit: { min: 0, max: 1e-5 }, name: 'abeta', symbol: 'Aβ', unit: 'm', displayUnit: '%·µm', min: 0, max: 1e-7, description: 'Pelgrom current-factor matching coefficient: σ(Δβ/β) of a pair = abeta/√(W·L)' }),
-  p({ limit: { min: 0, max: 1e-3, exclusiveMin: true }, name: 'lmin', symbol: 'Lmin', unit: 'm', displayUnit: 'µm', min: 10e-9, max: 20e-6, description: 'Minimum drawn gate length' }),
-  p({ limit: { min: 0, max: 1e-3, exclusiveMin: true }, name: 'wmin', symbol: 'Wmin', unit: 'm', displayUnit: 'µm', min: 10e-9, max: 100e-6, description: 'Minimum drawn width of one finger' }),
-  p({ limit: { min: 0, max: 1e-5, exclusiveMin: true }, name: 'wgrid', symbol: 'W grid', unit: 'm', displayUnit: 'nm', min: 0.1e-9, max: 1e-6, description: 'Drawing grid the width of a finger snaps to' }),
-  p({ limit: { min: 0, max: 1e9 }, name: 'jg', symbol: 'JG', unit: 'A/m²', displayUnit: 'A/m²', min: 0, max: 1e6, optional: true, description: 'Gate-leakage current density at vdd (gate current = jg·W·L); taken as given, no temperature law' }),
-  p({ limit: { min: 0, max: 1e6 }, name: 'js', symbol: 'JS', unit: 'A/m²', displayUnit: 'fA/µm²', min: 0, max: 10, optional: true, description: 'Drain-junction leakage density at vdd (current = js·W·ldiff); taken as given, no temperature law' }),
+  p({ hardLimit: { min: -5, max: 5 }, name: 'vt0', symbol: 'VT0', unit: 'V', displayUnit: 'V', plausible: { min: -1, max: 1.5 }, description: 'Threshold voltage at VSB = 0 and tnom, polarity-normalised (−VTP for PMOS): > 0 enhancement, < 0 depletion mode' }),
+  p({ hardLimit: { min: 0, max: 0.1, exclusiveMin: true }, name: 'kp', symbol: 'KP', unit: 'A/V²', displayUnit: 'µA/V²', plausible: { min: 10e-6, max: 2e-3 }, description: 'Transconductance parameter µ0·Cox at tnom' }),
+  p({ hardLimit: { min: 0, max: 5 }, name: 'gamma', symbol: 'γ', unit: '√V', displayUnit: '√V', plausible: { min: 0, max: 1.5 }, description: 'Body-effect coefficient √(2·q·εSi·NA)/Cox' }),
+  p({ hardLimit: { min: 0, max: 2, exclusiveMin: true }, name: 'twoPhiF', symbol: '2φF', unit: 'V', displayUnit: 'V', plausible: { min: 0.3, max: 1.2 }, description: 'Surface potential in strong inversion, 2·UT·ln(NA/ni)' }),
+  p({ hardLimit: { min: 0, max: 10 }, name: 'lambda', symbol: 'λ', unit: '1/V', displayUnit: '1/V', plausible: { min: 0, max: 1 }, description: 'Channel-length modulation; with lRef, the value at L = lRef (λ(L) = lambda·lRef/L)' }),
+  p({ name: 'lRef', symbol: 'Lref', unit: 'm', displayUnit: 'µm', plausible: { min: 10e-9, max: 100e-6, exclusiveMin: true }, optional: true, description: 'Length at which lambda was measured; when given, λ scales as 1/L' }),
+  p({ hardLimit: { min: 1, max: 10 }, name: 'n', symbol: 'n', unit: '', displayUnit: '', plausible: { min: 1, max: 3 }, optional: true, description: 'Subthreshold slope factor; when absent, n = 1 + γ/(2·√(2φF + VSB))' }),
+  p({ hardLimit: { min: 0, max: 1e-6, exclusiveMin: true }, name: 'tox', symbol: 'tox', unit: 'm', displayUnit: 'nm', plausible: { min: 0.5e-9, max: 100e-9 }, description: 'Gate-oxide thickness (SiO2-equivalent)' }),
+  p({ hardLimit: { min: 0, max: 1e-7 }, name: 'cgdo', symbol: 'CGDO', unit: 'F/m', displayUnit: 'fF/µm', plausible: { min: 0, max: 2e-9 }, description: 'Gate–drain (and gate–source) overlap capacitance per width' }),
+  p({ hardLimit: { min: 0, max: 1 }, name: 'cj', symbol: 'CJ', unit: 'F/m²', displayUnit: 'fF/µm²', plausible: { min: 0, max: 1e-2 }, description: 'Zero-bias junction capacitance per area of the source/drain diffusion' }),
+  p({ hardLimit: { min: 0, max: 1e-7 }, name: 'cjsw', symbol: 'CJSW', unit: 'F/m', displayUnit: 'fF/µm', plausible: { min: 0, max: 1e-9 }, description: 'Zero-bias junction sidewall capacitance per perimeter' }),
+  p({ hardLimit: { min: 0, max: 1e-3 }, name: 'ldiff', symbol: 'Ldiff', unit: 'm', displayUnit: 'µm', plausible: { min: 0, max: 10e-6 }, description: 'Length of the source/drain diffusion (area = W·ldiff)' }),
+  p({ hardLimit: { min: -0.05, max: 0.05 }, name: 'vtTc', symbol: 'dVT/dT', unit: 'V/K', displayUnit: 'mV/K', plausible: { min: -5e-3, max: 0 }, description: 'Temperature coefficient of the threshold (polarity-normalised; negative: VT falls when hotter)' }),
+  p({ hardLimit: { min: -5, max: 2 }, name: 'muExp', symbol: 'µ exponent', unit: '', displayUnit: '', plausible: { min: -3, max: 0 }, description: 'Mobility temperature exponent: kp ∝ (T/Tnom)^muExp, T in kelvin (about −1.5)' }),
+  p({ hardLimit: { min: 0, max: 1e-6 }, name: 'avt', symbol: 'AVT', unit: 'V·m', displayUnit: 'mV·µm', plausible: { min: 0, max: 50e-9 }, description: 'Pelgrom threshold-matching coefficient: σ(ΔVT) of a pair = avt/√(W·L)' }),
+  p({ hardLimit: { min: 0, max: 1e-5 }, name: 'abeta', symbol: 'Aβ', unit: 'm', displayUnit: '%·µm', plausible: { min: 0, max: 1e-7 }, description: 'Pelgrom current-factor matching coefficient: σ(Δβ/β) of a pair = abeta/√(W·L)' }),
+  p({ hardLimit: { min: 0, max: 1e-3, exclusiveMin: true }, name: 'lmin', symbol: 'Lmin', unit: 'm', displayUnit: 'µm', plausible: { min: 10e-9, max: 20e-6 }, description: 'Minimum drawn gate length' }),
+  p({ hardLimit: { min: 0, max: 1e-3, exclusiveMin: true }, name: 'wmin', symbol: 'Wmin', unit: 'm', displayUnit: 'µm', plausible: { min: 10e-9, max: 100e-6 }, description: 'Minimum drawn width of one finger' }),
+  p({ hardLimit: { min: 0, max: 1e-5, exclusiveMin: true }, name: 'wgrid', symbol: 'W grid', unit: 'm', displayUnit: 'nm', plausible: { min: 0.1e-9, max: 1e-6 }, description: 'Drawing grid the width of a finger snaps to' }),
+  p({ hardLimit: { min: 0, max: 1e9 }, name: 'jg', symbol: 'JG', unit: 'A/m²', displayUnit: 'A/m²', plausible: { min: 0, max: 1e6 }, optional: true, description: 'Gate-leakage current density at vdd (gate current = jg·W·L); taken as given, no temperature law' }),
+  p({ hardLimit: { min: 0, max: 1e6 }, name: 'js', symbol: 'JS', unit: 'A/m²', displayUnit: 'fA/µm²', plausible: { min: 0, max: 10 }, optional: true, description: 'Drain-junction leakage density at vdd (current = js·W·ldiff); taken as given, no temperature law' }),
 ] as const satisfies readonly ParameterInfo[];
 
 /** Process-level fields and corner shifts, for the editor and the CSV import. */
 export const PROCESS_FIELDS = [
-  p({ name: 'tnom', symbol: 'Tnom', unit: '°C', displayUnit: '°C', min: -60, max: 200, description: 'Temperature at which the parameters were extracted' }),
-  p({ limit: { min: 0, max: 100, exclusiveMin: true }, name: 'vdd', symbol: 'VDD', unit: 'V', displayUnit: 'V', min: 0.3, max: 20, description: 'Nominal supply voltage (off current is taken at VDS = vdd)' }),
-  p({ name: 'tempRange.min', symbol: 'Tmin', unit: '°C', displayUnit: '°C', min: -200, max: 300, optional: true, description: 'Lowest operating temperature' }),
-  p({ name: 'tempRange.max', symbol: 'Tmax', unit: '°C', displayUnit: '°C', min: -200, max: 300, optional: true, description: 'Highest operating temperature' }),
-  p({ limit: { min: -2, max: 2 }, name: 'dvt', symbol: 'ΔVT', unit: 'V', displayUnit: 'mV', min: -0.5, max: 0.5, description: 'Corner shift of the (polarity-normalised) threshold: > 0 slower' }),
-  p({ limit: { min: 0, max: 100, exclusiveMin: true }, name: 'kpScale', symbol: 'KP ×', unit: '', displayUnit: '', min: 0.1, max: 10, exclusiveMin: true, description: 'Corner factor on kp: < 1 slower' }),
+  p({ name: 'tnom', symbol: 'Tnom', unit: '°C', displayUnit: '°C', plausible: { min: -60, max: 200 }, description: 'Temperature at which the parameters were extracted' }),
+  p({ hardLimit: { min: 0, max: 100, exclusiveMin: true }, name: 'vdd', symbol: 'VDD', unit: 'V', displayUnit: 'V', plausible: { min: 0.3, max: 20 }, description: 'Nominal supply voltage (off current is taken at VDS = vdd)' }),
+  p({ name: 'tempRange.min', symbol: 'Tmin', unit: '°C', displayUnit: '°C', plausible: { min: -200, max: 300 }, optional: true, description: 'Lowest operating temperature' }),
+  p({ name: 'tempRange.max', symbol: 'Tmax', unit: '°C', displayUnit: '°C', plausible: { min: -200, max: 300 }, optional: true, description: 'Highest operating temperature' }),
+  p({ hardLimit: { min: -2, max: 2 }, name: 'dvt', symbol: 'ΔVT', unit: 'V', displayUnit: 'mV', plausible: { min: -0.5, max: 0.5 }, description: 'Corner shift of the (polarity-normalised) threshold: > 0 slower' }),
+  p({ hardLimit: { min: 0, max: 100, exclusiveMin: true }, name: 'kpScale', symbol: 'KP ×', unit: '', displayUnit: '', plausible: { min: 0.1, max: 10, exclusiveMin: true }, description: 'Corner factor on kp: < 1 slower' }),
 ] as const satisfies readonly ParameterInfo[];
 
 type DeviceParameterName = (typeof DEVICE_PARAMETERS)[number]['name'];
@@ -76,7 +82,7 @@ export function parameterInfo(name: string): ParameterInfo | undefined {
 
 function boundedNumber(info: ParameterInfo) {
   const unit = info.unit === '' ? '' : ` ${info.unit}`;
-  const limit = info.limit ?? info;
+  const limit = info.hardLimit;
   const range = `${limit.min}${unit} … ${limit.max}${unit}`;
   const base = z
     .number({ error: `${info.name} must be a number${info.unit ? ` in ${info.unit}` : ''}` })
@@ -84,7 +90,7 @@ function boundedNumber(info: ParameterInfo) {
   const bounded = limit.exclusiveMin
     ? base.gt(limit.min, { error: `${info.name} must be above ${limit.min}${unit} (range ${range})` })
     : base.min(limit.min, { error: `${info.name} must be in ${range}` });
-  return bounded.describe(`${info.description} [${info.unit || '1'}], accepted ${range}, plausible ${info.min}${unit} … ${info.max}${unit}`);
+  return bounded.describe(`${info.description} [${info.unit || '1'}], accepted ${range}, plausible ${info.plausible.min}${unit} … ${info.plausible.max}${unit}`);
 }
 
 function parameter(name: string) {

@@ -1,7 +1,8 @@
 import { z } from 'zod';
-import { modelSchema } from './compute.js';
+import { modelSchema } from './request-fields.js';
 import { userRefSchema } from './process-profile.js';
-import { deviceComputeErrorSchema, deviceResultSchema, deviceTargetsSchema } from './sheets.js';
+import { deviceComputeErrorSchema, deviceResultSchema } from './device.js';
+import { deviceTargetsSchema } from './device-targets.js';
 
 /**
  * Revisions: immutable, numbered snapshots of a sheet (r1, r2 …) with a content hash, as

@@ -7,7 +7,7 @@ import { displayQuantity } from '../utils/display-quantity';
 import { ParameterInput } from './parameter-input';
 
 const field = (name: string, unit: string, displayUnit: string, min: number, max: number, description: string): ParameterInfo => ({
-  name, symbol: name, unit, displayUnit, min, max, description, optional: true,
+  name, symbol: name, unit, displayUnit, plausible: { min, max }, hardLimit: { min, max }, description, optional: true,
 });
 
 const TOX = parameterInfo('tox')!;

@@ -32,12 +32,13 @@ export function editableQuantity(value: number | undefined, info: ParameterInfo)
 
 /** "10 µA/V² … 2000 µA/V²": the plausible range, in the unit the field shows. */
 export function rangeText(info: ParameterInfo): string {
-  return `${displayQuantity(info.min, info)} … ${displayQuantity(info.max, info)}`;
+  return `${displayQuantity(info.plausible.min, info)} … ${displayQuantity(info.plausible.max, info)}`;
 }
 
 /** True when the value lies in the parameter's plausible range (the server refuses the rest). */
 export function inRange(value: number, info: ParameterInfo): boolean {
-  return (info.exclusiveMin ? value > info.min : value >= info.min) && value <= info.max;
+  const { min, max, exclusiveMin } = info.plausible;
+  return (exclusiveMin ? value > min : value >= min) && value <= max;
 }
 
 /** A value of a diff or a table by its dotted path ("nmos.kp", "corners.FF.pmos.dvt"), in engineering notation. */

@@ -1,0 +1,61 @@
+import { z } from 'zod';
+import { polaritySchema } from './process.js';
+import { modelSchema } from './request-fields.js';
+
+/** The operating point of a sized device as every compute answer gives it, and the context of a result. */
+
+export const regionSchema = z.enum(['weak', 'moderate', 'strong']).describe('weak IC < 0.1 ≤ moderate ≤ 10 < strong (Binkley 2008)');
+
+export const leakageSchema = z.object({
+  conductsAtZeroVgs: z.boolean().describe('Depletion-mode device: conducts at VGS = 0, which is not leakage'),
+  idAtZeroVgs: z.number(),
+  subthreshold: z.number().nullable(),
+  gate: z.number(),
+  junction: z.number(),
+  ioff: z.number().nullable(),
+  ion: z.number(),
+  ionIoff: z.number().nullable(),
+});
+
+export const operatingPointSchema = z.object({
+  w: z.number().describe('Drawn width (all fingers), m'),
+  l: z.number(),
+  wOverL: z.number(),
+  vgs: z.number().describe('VGS (PMOS: VSG) reached, V'),
+  vds: z.number().describe('VDS (PMOS: VSD), V'),
+  vsb: z.number().describe('VSB (PMOS: VBS), V'),
+  vt: z.number().describe('Threshold with body effect, corner and temperature, polarity-normalised (PMOS: −VTP), V'),
+  vov: z.number().describe('VGS − VT reached, V'),
+  n: z.number(),
+  ut: z.number().describe('kT/q, V'),
+  beta: z.number().describe('kp(T)·W/L, A/V²'),
+  lambda: z.number().describe('λ at this L, 1/V'),
+  id: z.number(), gm: z.number(), gmb: z.number(), gds: z.number(),
+  ro: z.number().nullable().describe('1/gds, Ω; null when gds = 0 (infinite)'),
+  gmId: z.number(),
+  intrinsicGain: z.number().nullable().describe('gm/gds; null when gds = 0'),
+  ic: z.number().describe('Inversion coefficient ID/(2·n·β·UT²)'),
+  region: regionSchema,
+  vdsat: z.number(),
+  saturated: z.boolean(),
+  cgs: z.number(), cgd: z.number(), cdb: z.number(), csb: z.number(),
+  ft: z.number(),
+  sigmaVt: z.number().describe('Pelgrom σ(ΔVT) of a matched pair of this device, V (single device: sigmaVtSingle)'),
+  sigmaVtSingle: z.number(),
+  sigmaBeta: z.number().describe('σ(Δβ/β) of the pair'),
+  sigmaId: z.number().describe('σ(ΔID/ID) of the pair at equal VGS'),
+  sigmaVos: z.number().describe('Gate-referred σ(VOS) of the pair at equal ID, V'),
+  ioff: z.number().nullable().describe('Off current at VGS = 0, VDS = vdd, VSB = 0 plus gate and junction leakage, A; null for a depletion-mode device'),
+  ion: z.number(),
+  ionIoff: z.number().nullable(),
+  leakage: leakageSchema,
+});
+export type OperatingPointResponse = z.infer<typeof operatingPointSchema>;
+
+/** What every compute answer says about how it was made. */
+export const resultContext = {
+  engineVersion: z.string(),
+  polarity: polaritySchema,
+  flavour: z.string().optional(),
+  model: modelSchema,
+};
