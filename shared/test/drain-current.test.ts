@@ -38,27 +38,27 @@ describe('square law (Shichman & Hodges, IEEE JSSC 3(3), 1968), as SPICE level 1
   });
 });
 
-// Worked numbers recomputed from the interpolation ID = (β/2)(2nUT)²·ln²(1 + e^(VOV/(2nUT))) (the model family of
-// Enz, Krummenacher & Vittoz, Analog Integrated Circuits and Signal Processing 8, 83–114, 1995) for
-// β = 1 mA/V², n = 1.3, T = 300 K, in saturation (VDS = 5 V, λ = 0: the reverse term is below 1e-60).
-describe('all-region interpolation', () => {
+// Worked numbers recomputed from the EKV long-channel current ID = I_spec·ln²(1 + e^(VOV/(2nUT))), I_spec = 2nβUT²
+// (Enz, Krummenacher & Vittoz, Analog Integrated Circuits and Signal Processing 8, 83–114, 1995, eqs. for the
+// forward current in saturation) for β = 1 mA/V², n = 1.3, T = 300 K, in saturation (VDS = 5 V, λ = 0).
+describe('all-region model, long channel', () => {
   const beta = 1e-3;
   const n = 1.3;
   const id = (vov: number) => drainCurrent('all-region', beta, n, ut300, 0, vov, 5);
 
   it('reproduces ID at VOV = −0.3 … 1 V from its equation', () => {
-    const table: [number, number][] = [[-0.3, 2.966001e-10], [-0.2, 5.593741e-9], [-0.1, 9.36928e-8], [0, 1.085315e-6], [0.1, 6.462581e-6], [0.2, 2.067455e-5], [0.5, 1.250198e-4], [1, 5e-4]];
+    const table: [number, number][] = [[-0.3, 2.28154e-10], [-0.2, 4.302877e-9], [-0.1, 7.207139e-8], [0, 8.348579e-7], [0.1, 4.971216e-6], [0.2, 1.59035e-5], [0.5, 9.616904e-5], [1, 3.846154e-4]];
     for (const [vov, expected] of table) expect(id(vov) / expected).toBeCloseTo(1, 5);
   });
 
-  it('tends to the square law (β/2)·VOV² in strong inversion, with no 1/n', () => {
-    expect(id(1) / (0.5 * beta)).toBeCloseTo(1, 6);
-    expect(id(0.5) / (0.5 * beta * 0.25)).toBeCloseTo(1.0002, 4);
+  it('tends to (β/2n)·VOV² in strong inversion: the bulk-charge factor 1/n of the EKV model (Tsividis & McAndrew 2011, ch. 4)', () => {
+    expect(id(1) / ((0.5 * beta) / n)).toBeCloseTo(1, 6);
+    expect(id(0.5) / ((0.5 * beta * 0.25) / n)).toBeCloseTo(1.00016, 5);
   });
 
-  it('tends to the exponential 2n²βUT²·e^(VOV/(nUT)) in weak inversion', () => {
-    const weak = (vov: number) => 2 * n * n * beta * ut300 * ut300 * Math.exp(vov / (n * ut300));
-    expect(id(-0.3) / weak(-0.3)).toBeCloseTo(0.9886, 4);
+  it('tends to the exponential 2nβUT²·e^(VOV/(nUT)) in weak inversion', () => {
+    const weak = (vov: number) => 2 * n * beta * ut300 * ut300 * Math.exp(vov / (n * ut300));
+    expect(id(-0.3) / weak(-0.3)).toBeCloseTo(0.98860, 4);
     expect(id(-1) / weak(-1)).toBeCloseTo(1, 6);
   });
 
@@ -68,12 +68,82 @@ describe('all-region interpolation', () => {
     expect(out[3]).toBeCloseTo(1 / (n * ut300), 10);
   });
 
-  it('is zero at VDS → 0 and saturates once VDS passes VOV (saturation needs VDS > VOV: common practice, no source)', () => {
-    const atVds = (vds: number) => drainCurrent('all-region', beta, n, ut300, 0, 0.4, vds);
+  it('in weak inversion depends on VDS as 1 − e^(−VDS/UT), not e^(−VDS/(nUT)) (Tsividis & McAndrew 2011, ch. 5)', () => {
+    const weakAt = (vds: number) => drainCurrent('all-region', beta, n, ut300, 0, -0.8, vds);
+    // ln(1 + eˣ) = eˣ·(1 − eˣ/2 …): at VOV = −0.8 V the exponential law holds to about 1e-5.
+    for (const vds of [0.5 * ut300, ut300, 2 * ut300, 4 * ut300]) expect(weakAt(vds) / weakAt(1) / -Math.expm1(-vds / ut300)).toBeCloseTo(1, 4);
+  });
+
+  it('is zero at VDS → 0 and in strong inversion saturates once VDS passes VOV/n, below VOV (Tsividis & McAndrew 2011, ch. 4)', () => {
+    const vov = 0.4;
+    const atVds = (vds: number) => drainCurrent('all-region', beta, n, ut300, 0, vov, vds);
     expect(atVds(1e-9)).toBeLessThan(1e-12);
-    expect(atVds(0.2) / atVds(1.5)).toBeLessThan(0.8);
-    expect(atVds(0.6) / atVds(1.5)).toBeGreaterThan(0.999);
+    expect(atVds(0.15) / atVds(1.5)).toBeLessThan(0.95);
+    expect(atVds(vov / n + 0.15) / atVds(1.5)).toBeGreaterThan(0.999);
+    expect(atVds(vov) / atVds(1.5)).toBeGreaterThan(0.999);
     expect(drainCurrent('square-law', beta, n, ut300, 0, 0.4, 0.2)).toBeLessThan(drainCurrent('square-law', beta, n, ut300, 0, 0.4, 0.4));
+  });
+});
+
+describe('all-region model, short-channel terms', () => {
+  const beta = 1e-3;
+  const n = 1.3;
+  const long = { theta: 0, esat: Infinity, clm: 0, eta: 0 };
+
+  it('divides the current by 1 + θ·VOV in strong inversion (Sodini, Ko & Moll, IEEE TED 31(10), 1984)', () => {
+    const theta = 0.8;
+    const ratio = drainCurrent('all-region', beta, n, ut300, 0, 0.6, 1.8, { ...long, theta }) / drainCurrent('all-region', beta, n, ut300, 0, 0.6, 1.8, long);
+    expect(ratio).toBeCloseTo(1 / (1 + theta * 0.6), 3);
+  });
+
+  it('leaves weak inversion alone: θ acts on the smooth overdrive, which vanishes below threshold', () => {
+    const ratio = drainCurrent('all-region', beta, n, ut300, 0, -0.3, 1, { ...long, theta: 2 }) / drainCurrent('all-region', beta, n, ut300, 0, -0.3, 1, long);
+    expect(ratio).toBeGreaterThan(0.998);
+  });
+
+  it('lowers VDSsat by velocity saturation to Esat·L·(√(1 + 2VOV/(n·Esat·L)) − 1) (Sodini, Ko & Moll 1984)', () => {
+    const esat = 0.5;
+    drainCurrentInto('all-region', beta, n, ut300, 0, 1, 1.8, out, { ...long, esat });
+    expect(out[4]).toBeCloseTo(esat * (Math.sqrt(1 + 2 / (n * esat)) - 1), 3);
+  });
+
+  it('adds η·gm to gds for DIBL', () => {
+    const eta = 0.05;
+    drainCurrentInto('all-region', beta, n, ut300, 0, 0.3, 1.2, out, long);
+    const [gm, gds] = [out[1], out[2]];
+    drainCurrentInto('all-region', beta, n, ut300, 0, 0.3, 1.2, out, { ...long, eta });
+    expect(out[2] - gds).toBeCloseTo(eta * gm, 12);
+  });
+
+  it('gives an output conductance that falls with VDS and with length through channel-length modulation', () => {
+    const gdsAt = (vds: number, clm: number) => (drainCurrentInto('all-region', beta, n, ut300, 0, 0.3, vds, out, { ...long, clm }), out[2] / out[0]);
+    expect(gdsAt(1.5, 0.1)).toBeLessThan(gdsAt(0.6, 0.1));
+    expect(gdsAt(1.0, 0.05)).toBeLessThan(gdsAt(1.0, 0.1));
+  });
+
+  it('gm and gds are the derivatives of its own ID (central differences, fast-check)', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: -0.3, max: 1, noNaN: true }),
+        fc.double({ min: 0.05, max: 1.8, noNaN: true }),
+        fc.double({ min: 0, max: 1.5, noNaN: true }),
+        fc.double({ min: 0.2, max: 20, noNaN: true }),
+        fc.double({ min: 0, max: 0.3, noNaN: true }),
+        fc.double({ min: 0, max: 0.1, noNaN: true }),
+        (vov, vds, theta, esat, clm, eta) => {
+          const terms = { theta, esat, clm, eta };
+          const h = 1e-6;
+          const at = (o: number, d: number) => drainCurrent('all-region', beta, n, ut300, 0.05, o, d, terms);
+          drainCurrentInto('all-region', beta, n, ut300, 0.05, vov, vds, out, terms);
+          const gm = (at(vov + h, vds) - at(vov - h, vds)) / (2 * h);
+          // gds at fixed VGS: VOV rises by η per volt of VDS (DIBL).
+          const gds = (at(vov + eta * h, vds + h) - at(vov - eta * h, vds - h)) / (2 * h);
+          expect(Math.abs(out[1] - gm)).toBeLessThan(1e-5 * Math.abs(gm) + 1e-15);
+          expect(Math.abs(out[2] - gds)).toBeLessThan(1e-4 * Math.abs(gds) + 1e-13);
+          expect(out[3] * out[0]).toBeCloseTo(out[1], 12);
+        },
+      ),
+    );
   });
 });
 

@@ -45,7 +45,7 @@ function sizeResponse(process: Process, sizing: Sizing, polarity: Polarity, flav
 
 function ztcVgsOf(process: Process, sizing: Sizing, polarity: Polarity, flavour: string | undefined, model: CurrentModel, corner: string, temperature: number): number | null {
   try {
-    return zeroTemperatureCoefficientVgs(process, { polarity, flavour, corner, model, w: sizing.w, l: sizing.l, vds: sizing.vds, vsb: sizing.vsb }, temperature).vgs;
+    return zeroTemperatureCoefficientVgs(process, { polarity, flavour, corner, model, w: sizing.w, l: sizing.l, fingers: sizing.fingers, vds: sizing.vds, vsb: sizing.vsb }, temperature).vgs;
   } catch (error) {
     if (isEngineError(error)) return null;
     throw error;

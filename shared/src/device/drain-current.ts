@@ -1,9 +1,13 @@
+import { type ChannelTerms, LONG_CHANNEL } from './short-channel.js';
+
 /**
  * Drain current and its analytic derivatives, polarity-normalised, for the two models of docs/model.md.
- * Inputs in SI: beta = kp(T)·W/L (A/V²), n, ut = kT/q (V), lambda (1/V, already scaled by L),
- * vov = VGS − VT (V), vds > 0 (V). Each `…Into` function writes into `out`:
- *   out[0] = ID (A), out[1] = gm = ∂ID/∂VGS (S), out[2] = gds = ∂ID/∂VDS (S), out[3] = gm/ID (1/V),
- *   out[4] = VDSsat (V; see saturationVoltage in small-signal.ts).
+ * Inputs in SI: beta = kp(T)·Weff/Leff (A/V²), n, ut = kT/q (V), lambda (1/V, already scaled by L),
+ * vov = VGS − VT (V; VT already lowered by DIBL), vds > 0 (V), and the short-channel terms of the
+ * all-region model at this length (theta, esat, clm, eta; see short-channel.ts — the square law ignores them).
+ * Each `…Into` function writes into `out`:
+ *   out[0] = ID (A), out[1] = gm = ∂ID/∂VGS (S), out[2] = gds = ∂ID/∂VDS at fixed VGS (S, DIBL included),
+ *   out[3] = gm/ID (1/V), out[4] = VDSsat (V).
  * gm/ID is computed as its own ratio, so it stays finite (→ 1/(n·UT)) where ID underflows in deep weak inversion.
  * No allocation; the sweep runs the column kernels (allRegionColumns, squareLawColumns) over a whole series.
  */
@@ -27,7 +31,7 @@ const WEAK_ASYMPTOTE_X = -30;
  * array with a constant).
  */
 export interface KernelColumns {
-  /** kp(T)·W/L, A/V² */
+  /** kp(T)·Weff/Leff, A/V² */
   beta: Float64Array;
   n: Float64Array;
   /** kT/q, V */
@@ -38,6 +42,14 @@ export interface KernelColumns {
   vov: Float64Array;
   /** > 0, V */
   vds: Float64Array;
+  /** θ = θ0 + θ1/Leff, 1/V (all-region only) */
+  theta: Float64Array;
+  /** Esat·Leff, V; Infinity without velocity saturation (all-region only) */
+  esat: Float64Array;
+  /** Pclm/Leff (all-region only) */
+  clm: Float64Array;
+  /** DIBL η, V/V: adds η·gm to gds (all-region only) */
+  eta: Float64Array;
   id: Float64Array;
   gm: Float64Array;
   gds: Float64Array;
@@ -46,62 +58,104 @@ export interface KernelColumns {
 }
 
 /**
- * All-region interpolation (after Enz, Krummenacher & Vittoz, Analog Integrated Circuits and Signal
- * Processing 8, 83–114, 1995, with the square law's strong-inversion limit, no 1/n), for points 0 … count−1:
- * ID = (β/2)(2nUT)²·[F(VOV/(2nUT)) − F((VOV − VDS)/(2nUT))]·(1 + λ·VDS), F(x) = ln²(1 + eˣ),
- * with its analytic gm, gds, gm/ID and VDSsat (saturationVoltage in small-signal.ts). The one place this
- * formula is written; the sweep runs it over whole series, the scalar functions over one point.
+ * All-region model after Enz, Krummenacher & Vittoz (Analog Integrated Circuits and Signal Processing 8,
+ * 83–114, 1995), for points 0 … count−1, with the short-channel terms of docs/model.md §6.3:
+ *   ID = I_spec·[F(x_f) − F(x_r)]·(1 + λ·VDS)·M_clm / (1 + θ·V_P),  I_spec = 2·n·β·UT²,  F(x) = ln²(1 + eˣ),
+ *   x_f = VOV/(2nUT),  x_r = (VOV − n·VDS)/(2nUT),  V_P = 2nUT·ln(1 + e^x_f) (a smooth VOV),
+ *   M_clm = 1 + k·ln(1 + (VDS − VDSsat)₊/VDSsat),  k = clm/(1 + V_P/esat),
+ *   VDSsat = 2(V_P/n)/(1 + √(1 + 2V_P/(n·esat))) + 4UT·(1 − σ(x_f)),
+ * with its analytic gm, gds (+ η·gm for DIBL), gm/ID and VDSsat. Without the short-channel terms this is
+ * the EKV long-channel current: (β/2n)·VOV² in strong saturation, I_spec·e^(VOV/(nUT))·(1 − e^(−VDS/UT)) in
+ * weak inversion. The one place this formula is written; the sweep runs it over whole series, the scalar
+ * functions over one point.
  */
 export function allRegionColumns(count: number, c: KernelColumns): void {
-  const { beta, n, ut, lambda, vov, vds, id, gm, gds, gmId, vdsat } = c;
-  const [mb, mn, mu, ml, mo, md] = [beta, n, ut, lambda, vov, vds].map(maskOf);
+  const { beta, n, ut, lambda, vov, vds, theta, esat, clm, eta, id, gm, gds, gmId, vdsat } = c;
+  const [mb, mn, mu, ml, mo, md, mt, me, mc, mh] = [beta, n, ut, lambda, vov, vds, theta, esat, clm, eta].map(maskOf);
   for (let i = 0; i < count; i++) {
-    const a = 2 * n[i & mn] * ut[i & mu];
+    const nI = n[i & mn];
+    const u = ut[i & mu];
+    const a = 2 * nI * u;
     const inverseA = 1 / a;
     const v = vds[i & md];
-    const lambdaI = lambda[i & ml];
     const xf = vov[i & mo] * inverseA;
-    const m = 1 + lambdaI * v;
-    const p = 0.5 * beta[i & mb] * a * a;
+    const ispec = (0.5 * beta[i & mb] * a * a) / nI;
+    // 1. The long-channel core: d = F(x_f) − F(x_r) and its derivatives (per I_spec), ln(1 + e^x_f) and σ(x_f).
+    let d: number, dVov: number, dVds: number, lf: number, sf: number, coreGmId: number;
     if (xf < WEAK_ASYMPTOTE_X) {
-      const ef = Math.exp(2 * xf);
-      const g = -Math.expm1(-2 * v * inverseA);
-      const current = p * m * ef * g;
-      id[i] = current;
-      gm[i] = 2 * current * inverseA;
-      gds[i] = p * ef * (m * 2 * (1 - g) * inverseA + lambdaI * g);
-      gmId[i] = 2 * inverseA;
-      vdsat[i] = a * Math.exp(xf) + 2 * a * (1 - Math.exp(xf));
-      continue;
-    }
-    const xr = xf - v * inverseA;
-    let lf: number, sf: number, lr: number, sr: number;
-    if (xf > 0) {
-      const t = Math.exp(-xf);
-      lf = xf + Math.log1p(t);
-      sf = 1 / (1 + t);
-    } else {
       const t = Math.exp(xf);
-      lf = Math.log1p(t);
-      sf = t / (1 + t);
-    }
-    if (xr > 0) {
-      const t = Math.exp(-xr);
-      lr = xr + Math.log1p(t);
-      sr = 1 / (1 + t);
+      lf = t;
+      sf = t;
+      const ef = t * t;
+      const g = -Math.expm1(-v / u);
+      d = ef * g;
+      dVov = 2 * d * inverseA;
+      dVds = (ef * (1 - g)) / u;
+      coreGmId = 2 * inverseA;
     } else {
-      const t = Math.exp(xr);
-      lr = Math.log1p(t);
-      sr = t / (1 + t);
+      const xr = xf - v / (2 * u);
+      let lr: number, sr: number;
+      if (xf > 0) {
+        const t = Math.exp(-xf);
+        lf = xf + Math.log1p(t);
+        sf = 1 / (1 + t);
+      } else {
+        const t = Math.exp(xf);
+        lf = Math.log1p(t);
+        sf = t / (1 + t);
+      }
+      if (xr > 0) {
+        const t = Math.exp(-xr);
+        lr = xr + Math.log1p(t);
+        sr = 1 / (1 + t);
+      } else {
+        const t = Math.exp(xr);
+        lr = Math.log1p(t);
+        sr = t / (1 + t);
+      }
+      d = (lf - lr) * (lf + lr);
+      dVov = 2 * (lf * sf - lr * sr) * inverseA;
+      dVds = (lr * sr) / u;
+      // VDS so small that F(x_f) − F(x_r) rounds to 0: the limit F''/F' of the ratio.
+      coreGmId = d > 0 ? dVov / d : ((sf + lf * (1 - sf)) * inverseA) / lf;
     }
-    const d = (lf - lr) * (lf + lr);
-    const slope = lf * sf - lr * sr;
-    id[i] = p * m * d;
-    gm[i] = p * m * 2 * slope * inverseA;
-    gds[i] = p * (m * 2 * lr * sr * inverseA + lambdaI * d);
-    // VDS so small that F(xf) − F(xr) rounds to 0: the limit F''/F' of the ratio.
-    gmId[i] = d > 0 ? (2 * slope * inverseA) / d : ((sf + lf * (1 - sf)) * inverseA) / lf;
-    vdsat[i] = a * (lf + 2 * (1 - sf));
+    // 2. Saturation voltage: V_P/n in strong inversion (lowered by velocity saturation), 4UT in weak.
+    const e = esat[i & me];
+    const vp = a * lf;
+    const root = Math.sqrt(1 + (2 * vp) / (nI * e));
+    const sat = (2 * vp) / (nI * (1 + root)) + 4 * u * (1 - sf);
+    const satSlope = sf / (nI * root) - 4 * u * sf * (1 - sf) * inverseA;
+    // 3. Mobility degradation and velocity saturation in the current: ÷ (1 + θ·V_P).
+    const th = theta[i & mt];
+    const degradation = 1 + th * vp;
+    let lnKSlopeVov = -(th * sf) / degradation;
+    // 4. Channel-length modulation beyond VDSsat, logarithmic in VDS − VDSsat (smooth over 2UT).
+    let clmFactor = 1;
+    let lnClmSlopeVds = 0;
+    const k0 = clm[i & mc];
+    if (k0 > 0) {
+      const k = k0 / (1 + vp / e);
+      const s = 2 * u;
+      const z = (v - sat) / s;
+      const excess = z > 0 ? s * (z + Math.log1p(Math.exp(-z))) : s * Math.log1p(Math.exp(z));
+      const excessSlope = z > 0 ? 1 / (1 + Math.exp(-z)) : Math.exp(z) / (1 + Math.exp(z));
+      const logTerm = Math.log1p(excess / sat);
+      clmFactor = 1 + k * logTerm;
+      const kSlope = (-k * (sf / e)) / (1 + vp / e);
+      const logSlope = (satSlope * (1 - excessSlope)) / (sat + excess) - satSlope / sat;
+      lnKSlopeVov += (kSlope * logTerm + k * logSlope) / clmFactor;
+      lnClmSlopeVds = (k * excessSlope) / ((sat + excess) * clmFactor);
+    }
+    const lam = lambda[i & ml];
+    const lengthFactor = 1 + lam * v;
+    const scale = (ispec * lengthFactor * clmFactor) / degradation;
+    const current = scale * d;
+    const transconductance = scale * (dVov + d * lnKSlopeVov);
+    id[i] = current;
+    gm[i] = transconductance;
+    gds[i] = scale * (dVds + d * (lam / lengthFactor + lnClmSlopeVds)) + eta[i & mh] * transconductance;
+    gmId[i] = coreGmId + lnKSlopeVov;
+    vdsat[i] = sat;
   }
 }
 
@@ -162,16 +216,21 @@ function oneColumn(): Float64Array {
 
 const single: KernelColumns = {
   beta: oneColumn(), n: oneColumn(), ut: oneColumn(), lambda: oneColumn(), vov: oneColumn(), vds: oneColumn(),
+  theta: oneColumn(), esat: oneColumn(), clm: oneColumn(), eta: oneColumn(),
   id: oneColumn(), gm: oneColumn(), gds: oneColumn(), gmId: oneColumn(), vdsat: oneColumn(),
 };
 
-function runOnePoint(columns: (count: number, c: KernelColumns) => void, beta: number, n: number, ut: number, lambda: number, vov: number, vds: number, out: Float64Array): void {
+function runOnePoint(columns: (count: number, c: KernelColumns) => void, beta: number, n: number, ut: number, lambda: number, vov: number, vds: number, out: Float64Array, terms: ChannelTerms): void {
   single.beta[0] = beta;
   single.n[0] = n;
   single.ut[0] = ut;
   single.lambda[0] = lambda;
   single.vov[0] = vov;
   single.vds[0] = vds;
+  single.theta[0] = terms.theta;
+  single.esat[0] = terms.esat;
+  single.clm[0] = terms.clm;
+  single.eta[0] = terms.eta;
   columns(1, single);
   out[ID] = single.id[0];
   out[GM] = single.gm[0];
@@ -180,26 +239,26 @@ function runOnePoint(columns: (count: number, c: KernelColumns) => void, beta: n
   out[VDSAT] = single.vdsat[0];
 }
 
-/** One point of the all-region model into out (see the top of this file). */
-export function allRegionCurrentInto(beta: number, n: number, ut: number, lambda: number, vov: number, vds: number, out: Float64Array): void {
-  runOnePoint(allRegionColumns, beta, n, ut, lambda, vov, vds, out);
+/** One point of the all-region model into out (see the top of this file); long channel unless terms are given. */
+export function allRegionCurrentInto(beta: number, n: number, ut: number, lambda: number, vov: number, vds: number, out: Float64Array, terms: ChannelTerms = LONG_CHANNEL): void {
+  runOnePoint(allRegionColumns, beta, n, ut, lambda, vov, vds, out, terms);
 }
 
 /** One point of the square law into out (see the top of this file). */
 export function squareLawCurrentInto(beta: number, n: number, ut: number, lambda: number, vov: number, vds: number, out: Float64Array): void {
-  runOnePoint(squareLawColumns, beta, n, ut, lambda, vov, vds, out);
+  runOnePoint(squareLawColumns, beta, n, ut, lambda, vov, vds, out, LONG_CHANNEL);
 }
 
 /** Dispatches to the chosen model; see allRegionCurrentInto and squareLawCurrentInto. */
-export function drainCurrentInto(model: CurrentModel, beta: number, n: number, ut: number, lambda: number, vov: number, vds: number, out: Float64Array): void {
+export function drainCurrentInto(model: CurrentModel, beta: number, n: number, ut: number, lambda: number, vov: number, vds: number, out: Float64Array, terms: ChannelTerms = LONG_CHANNEL): void {
   if (model === 'square-law') squareLawCurrentInto(beta, n, ut, lambda, vov, vds, out);
-  else allRegionCurrentInto(beta, n, ut, lambda, vov, vds, out);
+  else allRegionCurrentInto(beta, n, ut, lambda, vov, vds, out, terms);
 }
 
 const scratch = new Float64Array(KERNEL_OUTPUTS);
 
 /** ID in amperes for one bias point (see drainCurrentInto for the arguments). */
-export function drainCurrent(model: CurrentModel, beta: number, n: number, ut: number, lambda: number, vov: number, vds: number): number {
-  drainCurrentInto(model, beta, n, ut, lambda, vov, vds, scratch);
+export function drainCurrent(model: CurrentModel, beta: number, n: number, ut: number, lambda: number, vov: number, vds: number, terms: ChannelTerms = LONG_CHANNEL): number {
+  drainCurrentInto(model, beta, n, ut, lambda, vov, vds, scratch, terms);
   return scratch[ID];
 }

@@ -50,6 +50,7 @@ export {
   type SmallSignal,
   smallSignal,
   saturationVoltage,
+  gmbRatioOf,
   inversionCoefficient,
   regionOf,
   WEAK_INVERSION_IC,
@@ -57,13 +58,24 @@ export {
 } from './small-signal.js';
 export {
   type GateCapacitances,
+  type ChargeBias,
+  type JunctionBias,
   oxideCapacitance,
   gateCapacitances,
-  gateSourceCapacitance,
-  gateDrainCapacitance,
   junctionCapacitance,
   transitFrequency,
+  DEFAULT_JUNCTION,
 } from './capacitance.js';
+export { type Channel, channelOf, kpAtLength } from './channel.js';
+export {
+  type ChannelTerms,
+  LONG_CHANNEL,
+  DEFAULT_DIBL_EXPONENT,
+  channelTermsAt,
+  effectiveLength,
+  effectiveWidth,
+  mobilityExponentAt,
+} from './short-channel.js';
 export {
   type MismatchDevice,
   type PairMismatch,
@@ -73,7 +85,7 @@ export {
   matchGroupMismatch,
   pelgromPairSigma,
 } from './mismatch.js';
-export { type Leakage, leakage } from './leakage.js';
+export { type Leakage, type LeakageEstimate, leakage, junctionLeakageFactor, gateInducedDrainLeakage, DEFAULT_GIDL } from './leakage.js';
 export { type ZtcDevice, type ZeroTemperatureCoefficient, zeroTemperatureCoefficientVgs } from './zero-temperature-coefficient.js';
 export { type ScalableDevice, scaleConstantField, dennardRatios } from './scaling.js';
 export {
