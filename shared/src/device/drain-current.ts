@@ -122,18 +122,18 @@ export function allRegionColumns(count: number, c: KernelColumns): void {
     // 2. Saturation voltage: V_P/n in strong inversion (lowered by velocity saturation), 4UT in weak.
     const e = esat[i & me];
     const vp = a * lf;
-    const root = Math.sqrt(1 + (2 * vp) / (nI * e));
+    const root = e === Infinity ? 1 : Math.sqrt(1 + (2 * vp) / (nI * e));
     const sat = (2 * vp) / (nI * (1 + root)) + 4 * u * (1 - sf);
-    const satSlope = sf / (nI * root) - 4 * u * sf * (1 - sf) * inverseA;
     // 3. Mobility degradation and velocity saturation in the current: ÷ (1 + θ·V_P).
     const th = theta[i & mt];
     const degradation = 1 + th * vp;
-    let lnKSlopeVov = -(th * sf) / degradation;
+    let lnKSlopeVov = th === 0 ? 0 : -(th * sf) / degradation;
     // 4. Channel-length modulation beyond VDSsat, logarithmic in VDS − VDSsat (smooth over 2UT).
     let clmFactor = 1;
     let lnClmSlopeVds = 0;
     const k0 = clm[i & mc];
     if (k0 > 0) {
+      const satSlope = sf / (nI * root) - 4 * u * sf * (1 - sf) * inverseA;
       const k = k0 / (1 + vp / e);
       const s = 2 * u;
       const z = (v - sat) / s;
