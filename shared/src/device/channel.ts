@@ -2,7 +2,8 @@ import type { DeviceParams } from '../schemas/process.js';
 import { lambdaAtLength } from './channel-length-modulation.js';
 import type { CurrentModel } from './drain-current.js';
 import { kpAtTemperature } from './mobility.js';
-import type { PreparedDevice } from './resolve-device.js';
+import { slopeFactor } from './slope-factor.js';
+import { type PreparedDevice, thresholdAt } from './resolve-device.js';
 import { type ChannelTerms, LONG_CHANNEL, channelTermsAt, effectiveLength, effectiveWidth, mobilityExponentAt } from './short-channel.js';
 
 /** A prepared device drawn at one width and length, as the current equations see it. */
@@ -39,4 +40,14 @@ export function channelOf(device: PreparedDevice, model: CurrentModel, w: number
   const weff = effectiveWidth(params, w, fingers);
   const kp = kpAtLength(device, leff);
   return { weff, leff, kp, beta: (kp * weff) / leff, lambda, terms: channelTermsAt(params, leff) };
+}
+
+/** VT of the channel at a bias: body effect, corner and temperature (thresholdAt), its length's shift, and DIBL at VDS. */
+export function thresholdOf(device: PreparedDevice, channel: Pick<Channel, 'terms'>, vsb: number, vds: number): number {
+  return thresholdAt(device, vsb) + channel.terms.vtShift - channel.terms.eta * vds;
+}
+
+/** The slope factor of the channel at VSB: the body's law (slopeFactor) plus its length's rise. */
+export function slopeFactorOf(device: PreparedDevice, channel: Pick<Channel, 'terms'>, vsb: number): number {
+  return slopeFactor(device.params, vsb) + channel.terms.nShift;
 }

@@ -1,3 +1,4 @@
+import { normalisedCharge } from './inversion-charge.js';
 import { type ChannelTerms, LONG_CHANNEL } from './short-channel.js';
 
 /**
@@ -22,9 +23,6 @@ export const VDSAT = 4;
 /** Length of the `out` array the kernels write. */
 export const KERNEL_OUTPUTS = 5;
 
-/** Below xf = VOV/(2nUT) = −30, ln(1+eˣ) = eˣ to 1e-13: the exponential asymptote is used (no underflow in ratios). */
-const WEAK_ASYMPTOTE_X = -30;
-
 /**
  * Per-point inputs and outputs of the column kernels. Entry i of an output is point i; an input holds
  * either one value per point or, with length 1, one value for every point (no need to fill a whole
@@ -44,6 +42,8 @@ export interface KernelColumns {
   vds: Float64Array;
   /** θ = θ0 + θ1/Leff, 1/V (all-region only) */
   theta: Float64Array;
+  /** θ2, 1/V² (all-region only) */
+  theta2: Float64Array;
   /** Esat·Leff, V; Infinity without velocity saturation (all-region only) */
   esat: Float64Array;
   /** Pclm/Leff (all-region only) */
@@ -58,82 +58,55 @@ export interface KernelColumns {
 }
 
 /**
- * All-region model after Enz, Krummenacher & Vittoz (Analog Integrated Circuits and Signal Processing 8,
- * 83–114, 1995), for points 0 … count−1, with the short-channel terms of docs/model.md §6.3:
- *   ID = I_spec·[F(x_f) − F(x_r)]·(1 + λ·VDS)·M_clm / (1 + θ·V_P),  I_spec = 2·n·β·UT²,  F(x) = ln²(1 + eˣ),
- *   x_f = VOV/(2nUT),  x_r = (VOV − n·VDS)/(2nUT),  V_P = 2nUT·ln(1 + e^x_f) (a smooth VOV),
+ * All-region model: the charge-based EKV long-channel current (C. C. Enz, E. A. Vittoz, Charge-Based MOS
+ * Transistor Modeling, Wiley, 2006, ch. 3; C. C. Enz, F. Krummenacher, E. A. Vittoz, Analog Integrated Circuits
+ * and Signal Processing 8, 83–114, 1995) for points 0 … count−1, with the short-channel terms of docs/model.md §6.3:
+ *   ID = I_spec·[i_f − i_r]·(1 + λ·VDS)·M_clm / (1 + θ·V_P + θ2·V_P²),  I_spec = 2·n·β·UT²,  i = q² + q,  v = 2q + ln q,
+ *   v_f = VOV/(n·UT),  v_r = (VOV − n·VDS)/(n·UT)  (inversion-charge.ts),  V_P = 2nUT·q_f (a smooth VOV),
  *   M_clm = 1 + k·ln(1 + (VDS − VDSsat)₊/VDSsat),  k = clm/(1 + V_P/esat),
- *   VDSsat = 2(V_P/n)/(1 + √(1 + 2V_P/(n·esat))) + 4UT·(1 − σ(x_f)),
+ *   VDSsat = 2(V_P/n)/(1 + √(1 + 2V_P/(n·esat))) + 4UT/(1 + q_f),
  * with its analytic gm, gds (+ η·gm for DIBL), gm/ID and VDSsat. Without the short-channel terms this is
- * the EKV long-channel current: (β/2n)·VOV² in strong saturation, I_spec·e^(VOV/(nUT))·(1 − e^(−VDS/UT)) in
- * weak inversion. The one place this formula is written; the sweep runs it over whole series, the scalar
- * functions over one point.
+ * (β/2n)·VOV² in strong saturation, I_spec·e^(VOV/(nUT))·(1 − e^(−VDS/UT)) in weak inversion, and
+ * gm·nUT/ID = 1/(0.5 + √(0.25 + IC)) between. The one place this formula is written; the sweep runs it over
+ * whole series, the scalar functions over one point.
  */
 export function allRegionColumns(count: number, c: KernelColumns): void {
-  const { beta, n, ut, lambda, vov, vds, theta, esat, clm, eta, id, gm, gds, gmId, vdsat } = c;
-  const [mb, mn, mu, ml, mo, md, mt, me, mc, mh] = [beta, n, ut, lambda, vov, vds, theta, esat, clm, eta].map(maskOf);
+  const { beta, n, ut, lambda, vov, vds, theta, theta2, esat, clm, eta, id, gm, gds, gmId, vdsat } = c;
+  const [mb, mn, mu, ml, mo, md, mt, me, mc, mh, mq] = [beta, n, ut, lambda, vov, vds, theta, esat, clm, eta, theta2].map(maskOf);
   for (let i = 0; i < count; i++) {
     const nI = n[i & mn];
     const u = ut[i & mu];
-    const a = 2 * nI * u;
-    const inverseA = 1 / a;
+    const nu = nI * u;
     const v = vds[i & md];
-    const xf = vov[i & mo] * inverseA;
-    const ispec = (0.5 * beta[i & mb] * a * a) / nI;
-    // 1. The long-channel core: d = F(x_f) − F(x_r) and its derivatives (per I_spec), ln(1 + e^x_f) and σ(x_f).
-    let d: number, dVov: number, dVds: number, lf: number, sf: number, coreGmId: number;
-    if (xf < WEAK_ASYMPTOTE_X) {
-      const t = Math.exp(xf);
-      lf = t;
-      sf = t;
-      const ef = t * t;
-      const g = -Math.expm1(-v / u);
-      d = ef * g;
-      dVov = 2 * d * inverseA;
-      dVds = (ef * (1 - g)) / u;
-      coreGmId = 2 * inverseA;
-    } else {
-      const xr = xf - v / (2 * u);
-      let lr: number, sr: number;
-      if (xf > 0) {
-        const t = Math.exp(-xf);
-        lf = xf + Math.log1p(t);
-        sf = 1 / (1 + t);
-      } else {
-        const t = Math.exp(xf);
-        lf = Math.log1p(t);
-        sf = t / (1 + t);
-      }
-      if (xr > 0) {
-        const t = Math.exp(-xr);
-        lr = xr + Math.log1p(t);
-        sr = 1 / (1 + t);
-      } else {
-        const t = Math.exp(xr);
-        lr = Math.log1p(t);
-        sr = t / (1 + t);
-      }
-      d = (lf - lr) * (lf + lr);
-      dVov = 2 * (lf * sf - lr * sr) * inverseA;
-      dVds = (lr * sr) / u;
-      // VDS so small that F(x_f) − F(x_r) rounds to 0: the limit F''/F' of the ratio.
-      coreGmId = d > 0 ? dVov / d : ((sf + lf * (1 - sf)) * inverseA) / lf;
-    }
+    const ispec = 2 * nI * beta[i & mb] * u * u;
+    // 1. The long-channel core: the normalised charges at source and drain, d = i_f − i_r and its derivatives.
+    const vf = vov[i & mo] / nu;
+    const qf = normalisedCharge(vf);
+    const qr = normalisedCharge(vf - v / u);
+    const dq = qf - qr;
+    const d = dq * (qf + qr + 1);
+    const dVov = dq / nu;
+    const dVds = qr / u;
+    // VDS so small that i_f − i_r rounds to 0: the limit of the ratio, 1/(nUT·(2q + 1)).
+    const coreGmId = d > 0 ? dVov / d : 1 / (nu * (2 * qf + 1));
     // 2. Saturation voltage: V_P/n in strong inversion (lowered by velocity saturation), 4UT in weak.
     const e = esat[i & me];
-    const vp = a * lf;
+    const vp = 2 * nu * qf;
     const root = e === Infinity ? 1 : Math.sqrt(1 + (2 * vp) / (nI * e));
-    const sat = (2 * vp) / (nI * (1 + root)) + 4 * u * (1 - sf);
-    // 3. Mobility degradation and velocity saturation in the current: ÷ (1 + θ·V_P).
+    const sat = (2 * vp) / (nI * (1 + root)) + (4 * u) / (1 + qf);
+    // 3. Mobility degradation and velocity saturation in the current: ÷ (1 + θ·V_P + θ2·V_P²).
     const th = theta[i & mt];
-    const degradation = 1 + th * vp;
-    let lnKSlopeVov = th === 0 ? 0 : -(th * sf) / degradation;
+    const th2 = theta2[i & mq];
+    const degradation = 1 + vp * (th + th2 * vp);
+    // dV_P/dVOV = 2q_f/(2q_f + 1), the smooth overdrive's slope.
+    const vpSlope = (2 * qf) / (2 * qf + 1);
+    let lnKSlopeVov = th === 0 && th2 === 0 ? 0 : -((th + 2 * th2 * vp) * vpSlope) / degradation;
     // 4. Channel-length modulation beyond VDSsat, logarithmic in VDS − VDSsat (smooth over 2UT).
     let clmFactor = 1;
     let lnClmSlopeVds = 0;
     const k0 = clm[i & mc];
     if (k0 > 0) {
-      const satSlope = sf / (nI * root) - 4 * u * sf * (1 - sf) * inverseA;
+      const satSlope = vpSlope / (nI * root) - (4 * u * vpSlope) / (2 * nu * (1 + qf) * (1 + qf));
       const k = k0 / (1 + vp / e);
       const s = 2 * u;
       const z = (v - sat) / s;
@@ -141,7 +114,7 @@ export function allRegionColumns(count: number, c: KernelColumns): void {
       const excessSlope = z > 0 ? 1 / (1 + Math.exp(-z)) : Math.exp(z) / (1 + Math.exp(z));
       const logTerm = Math.log1p(excess / sat);
       clmFactor = 1 + k * logTerm;
-      const kSlope = (-k * (sf / e)) / (1 + vp / e);
+      const kSlope = (-k * (vpSlope / e)) / (1 + vp / e);
       const logSlope = (satSlope * (1 - excessSlope)) / (sat + excess) - satSlope / sat;
       lnKSlopeVov += (kSlope * logTerm + k * logSlope) / clmFactor;
       lnClmSlopeVds = (k * excessSlope) / ((sat + excess) * clmFactor);
@@ -216,7 +189,7 @@ function oneColumn(): Float64Array {
 
 const single: KernelColumns = {
   beta: oneColumn(), n: oneColumn(), ut: oneColumn(), lambda: oneColumn(), vov: oneColumn(), vds: oneColumn(),
-  theta: oneColumn(), esat: oneColumn(), clm: oneColumn(), eta: oneColumn(),
+  theta: oneColumn(), theta2: oneColumn(), esat: oneColumn(), clm: oneColumn(), eta: oneColumn(),
   id: oneColumn(), gm: oneColumn(), gds: oneColumn(), gmId: oneColumn(), vdsat: oneColumn(),
 };
 
@@ -228,6 +201,7 @@ function runOnePoint(columns: (count: number, c: KernelColumns) => void, beta: n
   single.vov[0] = vov;
   single.vds[0] = vds;
   single.theta[0] = terms.theta;
+  single.theta2[0] = terms.theta2;
   single.esat[0] = terms.esat;
   single.clm[0] = terms.clm;
   single.eta[0] = terms.eta;

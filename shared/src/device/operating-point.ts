@@ -1,10 +1,9 @@
 import { DEFAULT_JUNCTION, gateCapacitances, junctionCapacitance, transitFrequency } from './capacitance.js';
-import { channelOf } from './channel.js';
+import { channelOf, slopeFactorOf, thresholdOf } from './channel.js';
 import type { CurrentModel } from './drain-current.js';
 import { type Leakage, leakage } from './leakage.js';
 import { pairMismatch } from './mismatch.js';
-import { type PreparedDevice, thresholdAt } from './resolve-device.js';
-import { slopeFactor } from './slope-factor.js';
+import { type PreparedDevice } from './resolve-device.js';
 import { type SmallSignal, gmbRatioOf, smallSignal } from './small-signal.js';
 
 export interface Bias {
@@ -66,9 +65,9 @@ export function operatingPoint(device: PreparedDevice, model: CurrentModel, w: n
   const { vgs, vds, vsb } = bias;
   const channel = channelOf(device, model, w, l, fingers);
   const { weff, leff, beta, lambda, terms } = channel;
-  const vt = thresholdAt(device, vsb) - terms.eta * vds;
+  const vt = thresholdOf(device, channel, vsb, vds);
   const vov = vgs - vt;
-  const n = slopeFactor(params, vsb);
+  const n = slopeFactorOf(device, channel, vsb);
   const signal = smallSignal(model, beta, n, ut, lambda, vov, vds, gmbRatioOf(model, params, vsb), terms);
   const capacitances = gateCapacitances(weff, leff, device.cox, params.cgdo, { vov, vds, n, ut });
   const grading = { pb: params.pb ?? DEFAULT_JUNCTION.pb, mj: params.mj ?? DEFAULT_JUNCTION.mj, mjsw: params.mjsw ?? DEFAULT_JUNCTION.mjsw };

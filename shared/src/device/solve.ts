@@ -1,11 +1,10 @@
-import { channelOf } from './channel.js';
+import { channelOf, slopeFactorOf, thresholdOf } from './channel.js';
 import { type CurrentModel, drainCurrent } from './drain-current.js';
 import { EngineError } from './errors.js';
 import { type OperatingPoint, operatingPoint } from './operating-point.js';
 import { overdriveForCurrent, overdriveForGmId } from './overdrive.js';
-import { type PreparedDevice, thresholdAt } from './resolve-device.js';
+import { type PreparedDevice } from './resolve-device.js';
 import { say } from './say.js';
-import { slopeFactor } from './slope-factor.js';
 import type { ChannelTerms } from './short-channel.js';
 import { DEFAULT_MAX_FINGER_WIDTH, type SnappedWidth, snapWidth } from './snap-width.js';
 import type { Warning } from '../schemas/warning.js';
@@ -91,8 +90,8 @@ export function solveSize(device: PreparedDevice, model: CurrentModel, target: S
   // The channel per metre of effective width (no finger has lost ΔW yet): kp(L, T)/Leff, λ, the short-channel terms.
   const perWidth = channelOf(device, model, 1, l, 0);
   const { lambda, terms } = perWidth;
-  const vt = thresholdAt(device, vsb) - terms.eta * vds;
-  const n = slopeFactor(params, vsb);
+  const vt = thresholdOf(device, perWidth, vsb, vds);
+  const n = slopeFactorOf(device, perWidth, vsb);
   const maxFingerWidth = target.maxFingerWidth ?? DEFAULT_MAX_FINGER_WIDTH;
   const dw = model === 'square-law' ? 0 : (params.dw ?? 0);
 

@@ -10,9 +10,11 @@ export class Scratch {
   readonly lambda: Float64Array;
   readonly leff: Float64Array;
   readonly theta: Float64Array;
+  readonly theta2: Float64Array;
   readonly esat: Float64Array;
   readonly clm: Float64Array;
   readonly eta: Float64Array;
+  readonly vtShift: Float64Array;
   readonly w: Float64Array;
   readonly beta: Float64Array;
   readonly vov: Float64Array;
@@ -34,9 +36,11 @@ export class Scratch {
     this.lambda = make();
     this.leff = make();
     this.theta = make();
+    this.theta2 = make();
     this.esat = make();
     this.clm = make();
     this.eta = make();
+    this.vtShift = make();
     this.w = make();
     this.beta = make();
     this.vov = make();
@@ -63,9 +67,12 @@ export interface SeriesInputs {
   lambda: Float64Array;
   /** Short-channel terms at leff (see short-channel.ts); constants 0/Infinity for the square law. */
   theta: Float64Array;
+  theta2: Float64Array;
   esat: Float64Array;
   clm: Float64Array;
   eta: Float64Array;
+  /** VT shift of the length from the long-channel VT, V (all-region only). */
+  vtShift: Float64Array;
   vds: Float64Array;
   /** Drawn width (all fingers), m. */
   w: Float64Array;

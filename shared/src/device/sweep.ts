@@ -99,15 +99,17 @@ function sweepSeries(
     vtZeroBias: one(device.vtZeroBias),
     vsb: param === 'vsb' ? values : one(request.vsb),
     vt: one(Number.NaN),
-    n: one(slopeFactor(params, request.vsb)),
+    n: one(slopeFactor(params, request.vsb) + terms.nShift),
     gmbRatio: one(gmbRatioOf(model, params, request.vsb)),
     l: param === 'l' ? values : one(request.l),
     leff: one(channel.leff),
     lambda: one(channel.lambda),
     theta: one(terms.theta),
+    theta2: one(terms.theta2),
     esat: one(terms.esat),
     clm: one(terms.clm),
     eta: one(terms.eta),
+    vtShift: one(terms.vtShift),
     vds: param === 'vds' ? values : one(request.vds),
     w: one(base.w),
     fingers: base.fingers,
@@ -132,7 +134,7 @@ function sweepSeries(
     for (let i = 0; i < count; i++) {
       try {
         vt[i] = vt0 + bodyEffect(gamma, twoPhiF, values[i]);
-        n[i] = slopeFactor(params, values[i]);
+        n[i] = slopeFactor(params, values[i]) + terms.nShift;
         gmbRatio[i] = gmbRatioOf(model, params, values[i]);
       } catch (error) {
         failures.add(i, error);
@@ -150,7 +152,8 @@ function sweepSeries(
     }
   }
   if (param === 'l') {
-    const { kp, leff, lambda, theta, esat, clm, eta } = scratch;
+    const { kp, leff, lambda, theta, theta2, esat, clm, eta, vtShift, n } = scratch;
+    const bodyN = slopeFactor(params, request.vsb);
     for (let i = 0; i < count; i++) {
       try {
         checkLength(device, values[i], 'sweep');
@@ -159,16 +162,19 @@ function sweepSeries(
         leff[i] = at.leff;
         lambda[i] = at.lambda;
         theta[i] = at.terms.theta;
+        theta2[i] = at.terms.theta2;
         esat[i] = at.terms.esat;
         clm[i] = at.terms.clm;
         eta[i] = at.terms.eta;
+        vtShift[i] = at.terms.vtShift;
+        n[i] = bodyN + at.terms.nShift;
       } catch (error) {
         failures.add(i, error);
       }
     }
-    Object.assign(inputs, { kp, leff, lambda, theta, esat, clm, eta });
+    Object.assign(inputs, { kp, leff, lambda, theta, theta2, esat, clm, eta, vtShift, n });
   }
-  inputs.vt = lowerByDibl(inputs, count);
+  inputs.vt = shiftThreshold(inputs, count);
 
   // 2. Width and gate: hold "w" keeps the request's sized width; hold "id" sizes per metre of width and scales below.
   const gateSwept = param === 'vov' || param === 'vgs' || param === 'gmId';
@@ -199,15 +205,15 @@ function sweepSeries(
   return { corner, temperature, values, columns, warnings };
 }
 
-/** VT lowered by DIBL, VT − η·VDS, per point where η or VDS varies. */
-function lowerByDibl(inputs: SeriesInputs, count: number): Float64Array {
-  const { vt, eta, vds } = inputs;
-  if (eta.length === 1 && eta[0] === 0) return vt;
-  if (vt.length === 1 && eta.length === 1 && vds.length === 1) return one(vt[0] - eta[0] * vds[0]);
-  const [mt, me, md] = [vt, eta, vds].map(maskOf);
-  const lowered = new Float64Array(count);
-  for (let i = 0; i < count; i++) lowered[i] = vt[i & mt] - eta[i & me] * vds[i & md];
-  return lowered;
+/** VT with its length's shift and lowered by DIBL, VT + ΔVT(L) − η·VDS, per point where any of them varies. */
+function shiftThreshold(inputs: SeriesInputs, count: number): Float64Array {
+  const { vt, eta, vds, vtShift } = inputs;
+  if (eta.length === 1 && eta[0] === 0 && vtShift.length === 1 && vtShift[0] === 0) return vt;
+  if (vt.length === 1 && eta.length === 1 && vds.length === 1 && vtShift.length === 1) return one(vt[0] + vtShift[0] - eta[0] * vds[0]);
+  const [mt, me, md, ms] = [vt, eta, vds, vtShift].map(maskOf);
+  const shifted = new Float64Array(count);
+  for (let i = 0; i < count; i++) shifted[i] = vt[i & mt] + vtShift[i & ms] - eta[i & me] * vds[i & md];
+  return shifted;
 }
 
 /** β = kp·Weff/Leff per point (hold "w"), or kp/Leff alone (per metre of effective width, hold "id"; scaled once the current is known). */
@@ -253,10 +259,10 @@ function overdriveColumn(
   into: Float64Array,
   failures: Failures,
 ): Float64Array {
-  const { vt, n, ut, vds, beta, lambda, theta, esat, clm, eta } = inputs;
+  const { vt, n, ut, vds, beta, lambda, theta, theta2, esat, clm, eta } = inputs;
   const [mt, mn, mu, md, mb, ml] = [vt, n, ut, vds, beta, lambda].map(maskOf);
-  const [mTheta, mEsat, mClm, mEta] = [theta, esat, clm, eta].map(maskOf);
-  const terms = { theta: 0, esat: Infinity, clm: 0, eta: 0 };
+  const [mTheta, mTheta2, mEsat, mClm, mEta] = [theta, theta2, esat, clm, eta].map(maskOf);
+  const terms = { theta: 0, theta2: 0, esat: Infinity, clm: 0, eta: 0, vtShift: 0, nShift: 0 };
   switch (mode) {
     case 'swept-vov':
       return values;
@@ -277,6 +283,7 @@ function overdriveColumn(
   }
   for (let i = 0; i < count; i++) {
     terms.theta = theta[i & mTheta];
+    terms.theta2 = theta2[i & mTheta2];
     terms.esat = esat[i & mEsat];
     terms.clm = clm[i & mClm];
     terms.eta = eta[i & mEta];

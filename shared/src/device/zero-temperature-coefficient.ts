@@ -1,9 +1,9 @@
 import type { Polarity, Process } from '../schemas/process.js';
 import { channelCurrentAt } from './channel-current.js';
-import { channelOf } from './channel.js';
+import { channelOf, thresholdOf } from './channel.js';
 import type { CurrentModel } from './drain-current.js';
 import { EngineError } from './errors.js';
-import { prepareDevice, thresholdAt } from './resolve-device.js';
+import { prepareDevice } from './resolve-device.js';
 
 export interface ZtcDevice {
   polarity: Polarity;
@@ -45,7 +45,7 @@ export function zeroTemperatureCoefficientVgs(process: Process, device: ZtcDevic
   const { w, l, vds, vsb } = device;
   const fingers = device.fingers ?? 1;
   const slope = (vgs: number) => channelCurrentAt(hotter, model, w, l, vgs, vds, vsb, fingers) - channelCurrentAt(colder, model, w, l, vgs, vds, vsb, fingers);
-  const vt = thresholdAt(at, vsb) - channelOf(at, model, w, l, fingers).terms.eta * vds;
+  const vt = thresholdOf(at, channelOf(at, model, w, l, fingers), vsb, vds);
   let lo = vt - 0.3;
   let hi = vt + 10;
   if (!(slope(lo) > 0 && slope(hi) < 0)) {

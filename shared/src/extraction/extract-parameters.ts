@@ -1,17 +1,15 @@
-import { levenbergMarquardt } from 'ml-levenberg-marquardt';
-import { Matrix, pseudoInverse } from 'ml-matrix';
-import type { DeviceParams, Polarity, Process } from '../schemas/process.js';
+import type { DeviceParams, Polarity } from '../schemas/process.js';
 import { celsiusToKelvin } from '../units/temperature.js';
-import { channelCurrentAt } from '../device/channel-current.js';
 import type { CurrentModel } from '../device/drain-current.js';
 import { EngineError } from '../device/errors.js';
 import { operatingPoint } from '../device/operating-point.js';
-import { type PreparedDevice, prepareDevice } from '../device/resolve-device.js';
 import { regionOf, type Region } from '../device/small-signal.js';
 import { thermalVoltage } from '../device/thermal-voltage.js';
 import { FIT_PARAMETER_INFO, type FitParameter, fitBounds, withFitted } from './fit-parameters.js';
-import { type MeasuredCurve, type MeasuredPoint, curvesOf } from './measured-curves.js';
+import { type LeastSquares, fitInRounds, standardErrors } from './fit-rounds.js';
 import { initialEstimates } from './initial-estimates.js';
+import { type MeasuredCurve, type MeasuredPoint, curvesOf } from './measured-curves.js';
+import { ModelAtPoints } from './model-at-points.js';
 
 export interface ExtractionInput {
   readonly polarity: Polarity;
@@ -26,6 +24,12 @@ export interface ExtractionInput {
   readonly noiseFloor?: number;
   /** Most Levenberg–Marquardt iterations; 300 when absent. */
   readonly maxIterations?: number;
+  /**
+   * Points whose measured gm/ID is below this are left out of an all-region fit: far above threshold, beyond the
+   * range a designer biases in, where mobility degradation would otherwise bend the fit of what sizing needs;
+   * 3 S/A when absent (0 keeps every point).
+   */
+  readonly minGmId?: number;
 }
 
 export interface FittedParameter {
@@ -75,19 +79,51 @@ export interface ExtractionProgress {
 
 const DEFAULT_NOISE_FLOOR = 1e-12;
 const DEFAULT_MAX_ITERATIONS = 300;
-const ITERATIONS_PER_ROUND = 10;
-/** A round that improves the error by less than this fraction ends the fit. */
-const CONVERGED_IMPROVEMENT = 1e-7;
-/** A model that refuses a point (EngineError) costs this much in ln ID, so the search turns away from it. */
-const REFUSAL_PENALTY = 10;
+const DEFAULT_MIN_GM_ID = 3;
+/** The density fit reads points up to this fraction of a curve's highest gm/ID (18.5 S/A of 31 on a 180 nm-class device). */
+const DENSITY_CEILING_FRACTION = 0.6;
 
-function processFor(input: ExtractionInput, params: DeviceParams): Process {
-  return { name: 'extraction', tnom: input.base.tnom, vdd: input.base.vdd, corners: [], nmos: params, pmos: params };
+/** Parameters of the current's shape: what the current does at a given VGS − VT (fitted with a threshold per curve). */
+const SHAPE: ReadonlySet<FitParameter> = new Set(['kp', 'dl', 'theta0', 'theta1', 'theta2', 'nl', 'pclm', 'lambda', 'muExp', 'muExpL']);
+/** Read off the subthreshold swing of the longest device (the physical n of weak inversion), not fitted. */
+const FROM_SWING: ReadonlySet<FitParameter> = new Set(['n']);
+
+/** gm/ID of each point from its curve, by central differences of ln ID (NaN at a curve's ends or where ID ≤ 0). */
+function measuredGmId(points: readonly MeasuredPoint[]): number[] {
+  const gmId = points.map(() => Number.NaN);
+  for (const curve of curvesOf(points)) {
+    const { indices } = curve;
+    for (let k = 1; k < indices.length - 1; k++) {
+      const [a, b] = [points[indices[k - 1]], points[indices[k + 1]]];
+      if (a.id > 0 && b.id > 0 && b.vgs > a.vgs) gmId[indices[k]] = (Math.log(b.id) - Math.log(a.id)) / (b.vgs - a.vgs);
+    }
+  }
+  return gmId;
+}
+
+/** √ of the gm/ID span of each chosen point (half the distance to its neighbours' gm/ID), normalised to a mean of 1. */
+function densityWeights(points: readonly MeasuredPoint[], curves: readonly MeasuredCurve[], gmId: readonly number[], chosen: ReadonlySet<number>): number[] {
+  const span = new Map<number, number>();
+  for (const curve of curves) {
+    const { indices } = curve;
+    indices.forEach((index, k) => {
+      if (!chosen.has(index)) return;
+      const before = gmId[indices[Math.max(0, k - 1)]];
+      const after = gmId[indices[Math.min(indices.length - 1, k + 1)]];
+      const width = Math.abs((Number.isFinite(before) ? before : gmId[index]) - (Number.isFinite(after) ? after : gmId[index])) / 2;
+      span.set(index, width);
+    });
+  }
+  const order = curves.flatMap((curve) => curve.indices.filter((index) => chosen.has(index)));
+  const mean = order.reduce((sum, index) => sum + (span.get(index) ?? 0), 0) / Math.max(order.length, 1);
+  return order.map((index) => Math.sqrt((span.get(index) ?? 0) / (mean || 1)));
 }
 
 /** Points a fit can read, and the reasons for the others. */
 function screen(input: ExtractionInput, vtEstimate: (point: MeasuredPoint) => number | null): { usable: boolean[]; excluded: ExcludedPoint[] } {
   const floor = input.noiseFloor ?? DEFAULT_NOISE_FLOOR;
+  const minGmId = input.model === 'all-region' ? (input.minGmId ?? DEFAULT_MIN_GM_ID) : 0;
+  const gmId = minGmId > 0 ? measuredGmId(input.points) : [];
   const usable: boolean[] = [];
   const excluded: ExcludedPoint[] = [];
   input.points.forEach((point, index) => {
@@ -99,6 +135,7 @@ function screen(input: ExtractionInput, vtEstimate: (point: MeasuredPoint) => nu
     else if (point.w <= 0 || point.l <= 0) reason = 'W or L is zero or negative';
     else if (point.l < input.base.params.lmin * 0.999) reason = 'L is below the profile\'s lmin';
     else if (point.id < floor) reason = `ID is below the noise floor (${floor} A)`;
+    else if (gmId[index] < minGmId) reason = `gm/ID is below ${minGmId} S/A: far above threshold, beyond the sizing range`;
     else if (input.model === 'square-law') {
       const vt = vtEstimate(point);
       if (vt !== null && point.vgs < vt + 0.15) reason = 'below threshold, where the square law does not hold';
@@ -127,8 +164,12 @@ function identifiable(input: ExtractionInput, curves: readonly MeasuredCurve[]):
     ['dl', allRegion && lengths >= 2, 'all curves share one length'],
     ['theta0', allRegion, ''],
     ['theta1', allRegion && lengths >= 2, 'all curves share one length'],
+    ['theta2', allRegion, ''],
     ['dibl', allRegion && drains >= 2, 'all curves share one VDS'],
     ['diblExp', allRegion && drains >= 2 && lengths >= 3, 'DIBL needs several VDS at three or more lengths'],
+    ['vtl', allRegion && lengths >= 2, 'all curves share one length'],
+    ['vtlExp', allRegion && lengths >= 3, 'fewer than three lengths'],
+    ['nl', allRegion && lengths >= 2, 'all curves share one length'],
     ['pclm', allRegion && drains >= 2, 'all curves share one VDS'],
     ['vtTc', temperatures >= 2, 'all curves share one temperature'],
     ['muExp', temperatures >= 2, 'all curves share one temperature'],
@@ -155,150 +196,105 @@ function identifiable(input: ExtractionInput, curves: readonly MeasuredCurve[]):
 export function extractParameters(input: ExtractionInput, onProgress?: (progress: ExtractionProgress) => void): ExtractionResult {
   const { points } = input;
   if (points.length < 5) throw new EngineError('VALIDATION_FAILED', `An extraction needs at least 5 points; got ${points.length}`, 'points');
-  const allCurves = curvesOf(points);
-  const estimates = initialEstimates(input, allCurves);
+  const estimates = initialEstimates(input, curvesOf(points));
   const { usable, excluded } = screen(input, (point) => estimates.vtAt(point));
-  const usableCount = usable.filter(Boolean).length;
+  const used = usable.map((ok, index) => (ok ? index : -1)).filter((index) => index >= 0);
   const curves = curvesOf(points, (index) => usable[index]);
   const { fit, held } = identifiable(input, curves);
-  if (usableCount < fit.length + 3) {
-    throw new EngineError('VALIDATION_FAILED', `Only ${usableCount} usable points for ${fit.length} parameters; measure more points (see the excluded list)`, 'points');
+  if (used.length < fit.length + 3) {
+    throw new EngineError('VALIDATION_FAILED', `Only ${used.length} usable points for ${fit.length} parameters; measure more points (see the excluded list)`, 'points');
   }
-
   const lmin = input.base.params.lmin;
-  const scale = fit.map((name) => FIT_PARAMETER_INFO[name].scale);
-  const bounds = fit.map((name) => fitBounds(name, lmin));
-  const initial = fit.map((name, k) => Math.min(Math.max(estimates.initial[name] ?? 0, bounds[k].min), bounds[k].max));
-  const used = points.map((_, index) => index).filter((index) => usable[index]);
-  const measuredLog = used.map((index) => Math.log(points[index].id));
-
-  const currentsFor = (values: readonly number[]) => {
-    const params = withFitted(input.base.params, fit, values);
-    const process = processFor(input, params);
-    const devices = new Map<number, PreparedDevice>();
-    const deviceAt = (temperature: number) => {
-      let device = devices.get(temperature);
-      if (!device) {
-        device = prepareDevice(process, input.polarity, { temperature });
-        devices.set(temperature, device);
-      }
-      return device;
-    };
-    return (index: number): number => {
-      const p = points[index];
-      try {
-        return channelCurrentAt(deviceAt(p.temperature), input.model, p.w, p.l, p.vgs, p.vds, p.vsb, p.fingers ?? 1);
-      } catch {
-        return Number.NaN;
-      }
-    };
-  };
-  const logModel = (normalised: number[]) => {
-    const current = currentsFor(normalised.map((v, k) => v * scale[k]));
-    return (k: number) => {
-      const id = current(used[k]);
-      return id > 0 && Number.isFinite(id) ? Math.log(id) : measuredLog[k] + REFUSAL_PENALTY;
-    };
-  };
-  const errorOf = (normalised: number[]) => {
-    const model = logModel(normalised);
-    let sum = 0;
-    for (let k = 0; k < used.length; k++) sum += (model(k) - measuredLog[k]) ** 2;
-    return sum;
-  };
-
-  const data = { x: used.map((_, k) => k), y: measuredLog };
-  const minValues = bounds.map((b, k) => b.min / scale[k]);
-  const maxValues = bounds.map((b, k) => b.max / scale[k]);
   const maxIterations = input.maxIterations ?? DEFAULT_MAX_ITERATIONS;
-  let values = initial.map((v, k) => v / scale[k]);
-  let error = errorOf(values);
-  let iterations = 0;
-  let converged = false;
-  let damping = 1e-2;
-  onProgress?.({ iterations, maxIterations, error });
-  while (iterations < maxIterations && !converged) {
-    const round = levenbergMarquardt(data, logModel, {
-      initialValues: values,
-      minValues,
-      maxValues,
-      damping,
-      gradientDifference: 1e-6,
-      centralDifference: true,
-      maxIterations: Math.min(ITERATIONS_PER_ROUND, maxIterations - iterations),
-      errorTolerance: 1e-14,
-    });
-    iterations += Math.max(round.iterations, 1);
-    const next = errorOf(round.parameterValues);
-    if (next < error) {
-      converged = (error - next) <= CONVERGED_IMPROVEMENT * error || next < 1e-12;
-      values = round.parameterValues;
-      error = next;
-    } else {
-      // No progress at this damping: a few more rounds with a steeper (smaller-step) descent, then stop.
-      damping *= 100;
-      converged = damping > 1e4;
-    }
-    onProgress?.({ iterations, maxIterations, error });
+  const startOf = (name: FitParameter) => {
+    const { min, max } = fitBounds(name, lmin);
+    return Math.min(Math.max(estimates.initial[name] ?? 0, min), max);
+  };
+  const model = new ModelAtPoints(input.polarity, input.model, input.base, points);
+  let done = 0;
+  const report = (iterations: number, error: number) => onProgress?.({ iterations: done + iterations, maxIterations, error });
+  const stage = (names: readonly FitParameter[], residualsOf: (params: DeviceParams) => Float64Array) => {
+    const problem = fitProblem(input.base.params, names, values, lmin, residualsOf);
+    const result = fitInRounds(problem, problem.start, maxIterations, report);
+    done += result.iterations;
+    values = problem.valuesOf(result.values);
+    standardErrors(problem, result.values, result.error).forEach((e, k) => errors.set(names[k], e === null ? null : e * FIT_PARAMETER_INFO[names[k]].scale));
+    return result.converged;
+  };
+
+  let values = new Map<FitParameter, number>(fit.map((name) => [name, startOf(name)]));
+  const errors = new Map<FitParameter, number | null>();
+  let converged: boolean;
+  if (input.model === 'square-law') {
+    // SPICE level 1's own parameters: one joint fit of ln ID over every usable point.
+    converged = stage(fit, (params) => model.logResiduals(params, used));
+  } else {
+    // 1. The current density against gm/ID, point by point at the gm/ID each point shows: what sets W at a gm/ID,
+    //    fitted free of the threshold (which only a first-order law describes), with n from the swing. Only where
+    //    designers size, up to DENSITY_CEILING_FRACTION of the curve's highest gm/ID: nearer the weak-inversion
+    //    ceiling the density is ill-conditioned and a first-order law cannot follow every compact model there.
+    const gmId = measuredGmId(points);
+    const ceiling = new Map<MeasuredCurve, number>(curves.map((curve) => [curve, Math.max(...curve.indices.map((i) => (Number.isFinite(gmId[i]) ? gmId[i] : 0)))]));
+    const dense = curves.flatMap((curve) => curve.indices.filter((i) => Number.isFinite(gmId[i]) && gmId[i] <= DENSITY_CEILING_FRACTION * (ceiling.get(curve) as number)));
+    // Each point weighs by the stretch of gm/ID it stands for, so the fit is even over gm/ID, not crowded
+    // into strong inversion where equal VGS steps put most of the points.
+    const weight = densityWeights(points, curves, gmId, new Set(dense));
+    const shaped = stage(fit.filter((name) => SHAPE.has(name)), (params) => model.densityResiduals(params, dense, gmId).map((r, k) => r * weight[k]));
+    const offsets = new Map<MeasuredCurve, number>();
+    // 2. The threshold law (VT0, body effect, DIBL, length, temperature) through the threshold each curve showed.
+    const atShape = withFitted(input.base.params, [...values.keys()], [...values.values()]);
+    model.shapeResiduals(atShape, curves, offsets);
+    const thresholds = curves.map((curve) => model.thresholdOf(atShape, curve) + (offsets.get(curve) ?? 0));
+    const lawed = stage(fit.filter((name) => !SHAPE.has(name) && !FROM_SWING.has(name)), (params) => Float64Array.from(curves, (curve, k) => model.thresholdOf(params, curve) - thresholds[k]));
+    converged = shaped && lawed;
   }
 
-  const fittedValues = values.map((v, k) => v * scale[k]);
-  const fitted = withFitted(input.base.params, fit, fittedValues);
-  const standardErrors = standardErrorsOf(logModel, values, used.length, error, scale);
-  const current = currentsFor(fittedValues);
-  const modelled = points.map((_, index) => (usable[index] ? current(index) : Number.NaN));
+  const names = [...values.keys()];
+  const fitted = withFitted(input.base.params, names, names.map((name) => values.get(name) as number));
+  const modelled = points.map((_, index) => (usable[index] ? model.currentOf(fitted, index) : Number.NaN));
   const residuals = points.map((p, index) => (usable[index] ? modelled[index] / p.id - 1 : Number.NaN));
   return {
     model: input.model,
-    parameters: fit.map((name, k) => ({ name, value: fittedValues[k], unit: FIT_PARAMETER_INFO[name].unit, initial: initial[k], standardError: standardErrors[k] })),
+    parameters: fit.map((name) => ({ name, value: values.get(name) as number, unit: FIT_PARAMETER_INFO[name].unit, initial: startOf(name), standardError: errors.get(name) ?? null })),
     held: held.map(({ name, reason }) => ({ name, value: input.base.params[name], reason })),
     fitted,
     rms: regionErrors(input, fitted, residuals, usable),
     excluded,
-    iterations,
+    iterations: done,
     converged,
     residuals,
     modelled,
   };
 }
 
-/** One standard error per parameter from the Jacobian at the solution: σ² = s²·diag((JᵀJ)⁻¹), s² = SSR/(N − P). */
-function standardErrorsOf(logModel: (v: number[]) => (k: number) => number, values: number[], count: number, error: number, scale: number[]): (number | null)[] {
-  const p = values.length;
-  if (count <= p) return values.map(() => null);
-  const base = logModel(values);
-  const jacobian = new Matrix(count, p);
-  for (let j = 0; j < p; j++) {
-    const h = 1e-6 * Math.max(1, Math.abs(values[j]));
-    const up = logModel(values.map((v, k) => (k === j ? v + h : v)));
-    const down = logModel(values.map((v, k) => (k === j ? v - h : v)));
-    for (let i = 0; i < count; i++) jacobian.set(i, j, (up(i) - down(i)) / (2 * h));
-  }
-  void base;
-  const normal = jacobian.transpose().mmul(jacobian);
-  const covariance = pseudoInverse(normal);
-  const variance = error / (count - p);
-  return values.map((_, k) => {
-    const c = covariance.get(k, k) * variance;
-    return Number.isFinite(c) && c > 0 ? Math.sqrt(c) * scale[k] : null;
-  });
+/** A least-squares problem over some parameters, the others held at their current values, in units of each one's scale. */
+function fitProblem(base: DeviceParams, names: readonly FitParameter[], values: ReadonlyMap<FitParameter, number>, lmin: number, residualsOf: (params: DeviceParams) => Float64Array) {
+  const scale = names.map((name) => FIT_PARAMETER_INFO[name].scale);
+  const bounds = names.map((name) => fitBounds(name, lmin));
+  const heldNames = [...values.keys()].filter((name) => !names.includes(name));
+  const paramsOf = (normalised: readonly number[]) =>
+    withFitted(base, [...heldNames, ...names], [...heldNames.map((name) => values.get(name) as number), ...names.map((_, k) => normalised[k] * scale[k])]);
+  const start = names.map((name, k) => (values.get(name) as number) / scale[k]);
+  const problem: LeastSquares & { start: number[]; valuesOf(normalised: readonly number[]): Map<FitParameter, number> } = {
+    count: residualsOf(paramsOf(start)).length,
+    residuals: (normalised) => residualsOf(paramsOf(normalised)),
+    minValues: bounds.map((b, k) => b.min / scale[k]),
+    maxValues: bounds.map((b, k) => b.max / scale[k]),
+    start,
+    valuesOf: (normalised) => new Map<FitParameter, number>([...values, ...names.map((name, k) => [name, normalised[k] * scale[k]] as const)]),
+  };
+  return problem;
 }
 
 /** RMS of the relative current error per region of the fitted model (by its inversion coefficient) and overall. */
 function regionErrors(input: ExtractionInput, fitted: DeviceParams, residuals: readonly number[], usable: readonly boolean[]): RegionError[] {
-  const process = processFor(input, fitted);
+  const deviceAt = new ModelAtPoints(input.polarity, input.model, input.base, input.points).devicesFor(fitted);
   const sums: Record<Region | 'all', { sum: number; points: number }> = { weak: { sum: 0, points: 0 }, moderate: { sum: 0, points: 0 }, strong: { sum: 0, points: 0 }, all: { sum: 0, points: 0 } };
-  const devices = new Map<number, PreparedDevice>();
   input.points.forEach((p, index) => {
     if (!usable[index] || !Number.isFinite(residuals[index])) return;
-    let device = devices.get(p.temperature);
-    if (!device) {
-      device = prepareDevice(process, input.polarity, { temperature: p.temperature });
-      devices.set(p.temperature, device);
-    }
     let region: Region;
     try {
-      region = regionOf(operatingPoint(device, input.model, p.w, p.l, { vgs: p.vgs, vds: p.vds, vsb: p.vsb }, p.fingers ?? 1).ic);
+      region = regionOf(operatingPoint(deviceAt(p.temperature), input.model, p.w, p.l, { vgs: p.vgs, vds: p.vds, vsb: p.vsb }, p.fingers ?? 1).ic);
     } catch {
       return;
     }

@@ -1,7 +1,7 @@
 import type { DeviceParams } from '../schemas/process.js';
 
 /** The parameters an extraction can fit; every other field of the profile is taken from the base profile. */
-export const FIT_PARAMETERS = ['vt0', 'kp', 'n', 'gamma', 'twoPhiF', 'lambda', 'dl', 'theta0', 'theta1', 'dibl', 'diblExp', 'pclm', 'vtTc', 'muExp', 'muExpL'] as const;
+export const FIT_PARAMETERS = ['vt0', 'kp', 'n', 'gamma', 'twoPhiF', 'lambda', 'dl', 'theta0', 'theta1', 'theta2', 'dibl', 'diblExp', 'vtl', 'vtlExp', 'nl', 'pclm', 'vtTc', 'muExp', 'muExpL'] as const;
 export type FitParameter = (typeof FIT_PARAMETERS)[number];
 
 export interface FitParameterInfo {
@@ -21,11 +21,15 @@ export const FIT_PARAMETER_INFO: Record<FitParameter, FitParameterInfo> = {
   gamma: { unit: '√V', scale: 0.5, min: 0, max: 3 },
   twoPhiF: { unit: 'V', scale: 0.8, min: 0.3, max: 1.5 },
   lambda: { unit: '1/V', scale: 0.05, min: 0, max: 2 },
-  dl: { unit: 'm', scale: 1e-8, min: -1e-7, max: 1e-7 },
+  dl: { unit: 'm', scale: 1e-8, min: -1e-7, max: 5e-7 },
   theta0: { unit: '1/V', scale: 0.1, min: 0, max: 5 },
   theta1: { unit: 'm/V', scale: 1e-7, min: 0, max: 1e-5 },
+  theta2: { unit: '1/V²', scale: 1, min: 0, max: 20 },
   dibl: { unit: 'V/V', scale: 0.02, min: 0, max: 0.5 },
   diblExp: { unit: '', scale: 1, min: 0, max: 6 },
+  vtl: { unit: 'V', scale: 0.02, min: -0.4, max: 0.4 },
+  vtlExp: { unit: '', scale: 1, min: 0.2, max: 6 },
+  nl: { unit: '', scale: 0.1, min: -0.5, max: 2 },
   pclm: { unit: 'm', scale: 1e-8, min: 0, max: 1e-5 },
   vtTc: { unit: 'V/K', scale: 1e-3, min: -0.01, max: 0.005 },
   muExp: { unit: '', scale: 1, min: -4, max: 0.5 },

@@ -74,8 +74,12 @@ export function initialEstimates(input: ExtractionInput, curves: readonly Measur
     dl: params.dl ?? 0,
     theta0: params.theta0 ?? 0.05,
     theta1: params.theta1 ?? 0,
+    theta2: params.theta2 ?? 0,
     dibl: params.dibl ?? 0.01,
     diblExp: params.diblExp ?? 2,
+    vtl: params.vtl ?? 0,
+    vtlExp: params.vtlExp ?? 2,
+    nl: params.nl ?? 0,
     pclm: params.pclm ?? 1e-8,
     vtTc: params.vtTc,
     muExp: params.muExp,
@@ -83,12 +87,22 @@ export function initialEstimates(input: ExtractionInput, curves: readonly Measur
   };
   const vt0 = initial.vt0 as number;
 
-  // n from the swing of the most saturated reference curve.
-  const swing = saturated?.estimate.swing;
-  const ut = thermalVoltage(celsiusToKelvin(saturated?.curve.temperature ?? base.tnom));
-  const nFromSwing = swing ? swing / (Math.LN10 * ut) : undefined;
-  const n = nFromSwing !== undefined && nFromSwing >= 1 && nFromSwing <= 3 ? nFromSwing : (params.n ?? 1 + params.gamma / (2 * Math.sqrt(params.twoPhiF)));
+  // n from the swing of the most saturated curve at the longest length, and its rise at the shortest (nl).
+  const nOfSwing = (read: Read | undefined) => {
+    const swing = read?.estimate.swing;
+    const found = swing ? swing / (Math.LN10 * thermalVoltage(celsiusToKelvin(read.curve.temperature))) : undefined;
+    return found !== undefined && found >= 1 && found <= 3 ? found : undefined;
+  };
+  const n = nOfSwing(saturated) ?? params.n ?? 1 + params.gamma / (2 * Math.sqrt(params.twoPhiF));
   initial.n = n;
+  const shortSaturated = [...closest(atZeroBody, (r) => r.curve.l, 0)].sort((a, b) => b.curve.vds - a.curve.vds)[0];
+  const nShort = nOfSwing(shortSaturated);
+  if (nShort !== undefined && shortSaturated && saturated && shortSaturated.curve.l < saturated.curve.l) {
+    // Δn(L) = nl·(lmin/L)² (the exponent's starting value): solve nl from the two lengths.
+    const reach = (l: number) => (params.lmin / l) ** 2;
+    initial.nl = (nShort - n) / (reach(shortSaturated.curve.l) - reach(saturated.curve.l));
+    initial.n = n - initial.nl * reach(saturated.curve.l);
+  }
 
   // γ and 2φF from the threshold against VSB at the reference length, drain voltage and temperature.
   if (reference) {
