@@ -1,16 +1,24 @@
 import { randomBytes, scrypt, timingSafeEqual, type ScryptOptions } from 'node:crypto';
+import { availableParallelism } from 'node:os';
 import { deserialize, serialize } from '@phc/format';
 import bcrypt from 'bcryptjs';
+import pLimit from 'p-limit';
 
 /**
  * scrypt (RFC 7914, 2016) with N = 2^15, r = 8, p = 3: one of the equivalent settings the OWASP Password
  * Storage Cheat Sheet (2023) lists (N = 2^17, r = 8, p = 1 and its trades of memory for parallel passes).
  * Each hash takes 128·N·r = 32 MiB and about 0.7 s on the 2-core machine CI uses (N = 2^17, p = 1 took 1.7 s
  * there), and runs on libuv's thread pool, never on the event loop, so a burst of sign-ins does not stall
- * other requests; at most the pool's four threads hash at once (128 MiB). The parameters are stored in each
+ * other requests; at most one hash per core but one runs at once (see `hashing`). The parameters are stored in each
  * hash: raising them later re-hashes every account on its next sign-in.
  */
 export const SCRYPT_PARAMS = { ln: 15, r: 8, p: 3 } as const;
+
+/**
+ * Hashes at once: one core fewer than the machine has (at least one), so that a burst of sign-ins always
+ * leaves a core to the event loop and every other request; the rest wait their turn.
+ */
+const hashing = pLimit(Math.max(1, availableParallelism() - 1));
 const SALT_BYTES = 16;
 const HASH_BYTES = 32;
 
@@ -82,7 +90,10 @@ function scryptOf(password: string, salt: Buffer, params: ScryptParams, length =
   const N = 2 ** params.ln;
   // Node refuses to use more than maxmem; scrypt needs 128·N·r bytes (RFC 7914 §6), so leave it room.
   const options: ScryptOptions = { N, r: params.r, p: params.p, maxmem: 2 * 128 * N * params.r };
-  return new Promise((resolve, reject) => {
-    scrypt(password.normalize('NFKC'), salt, length, options, (error, key) => (error ? reject(error) : resolve(key)));
-  });
+  return hashing(
+    () =>
+      new Promise<Buffer>((resolve, reject) => {
+        scrypt(password.normalize('NFKC'), salt, length, options, (error, key) => (error ? reject(error) : resolve(key)));
+      }),
+  );
 }
