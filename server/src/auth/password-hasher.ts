@@ -9,7 +9,7 @@ import pLimit from 'p-limit';
  * Storage Cheat Sheet (2023) lists (N = 2^17, r = 8, p = 1 and its trades of memory for parallel passes).
  * Each hash takes 128·N·r = 32 MiB and about 0.7 s on the 2-core machine CI uses (N = 2^17, p = 1 took 1.7 s
  * there), and runs on libuv's thread pool, never on the event loop, so a burst of sign-ins does not stall
- * other requests; at most one hash per core but one runs at once (see `hashing`). The parameters are stored in each
+ * other requests; at most (cores − 1, at least 1) hashes run at once (see `hashing`). The parameters are stored in each
  * hash: raising them later re-hashes every account on its next sign-in.
  */
 export const SCRYPT_PARAMS = { ln: 15, r: 8, p: 3 } as const;
