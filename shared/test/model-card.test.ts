@@ -30,6 +30,13 @@ describe('SPICE numbers', () => {
     expect(parseSpiceNumber('-.5')).toBe(-0.5);
   });
 
+  it('reads a suffixed number as the decimal it means ("4.1n" is exactly 4.1e-9, "1.5e3k" is 1.5e6)', () => {
+    expect(parseSpiceNumber('4.1n')).toBe(4.1e-9);
+    expect(parseSpiceNumber('0.18u')).toBe(0.18e-6);
+    expect(parseSpiceNumber('1.5e3k')).toBe(1.5e6);
+    expect(parseSpiceNumber('2E-3MEG')).toBe(2e3);
+  });
+
   it('ignores letters after the scale suffix as a unit, as SPICE does ("10uF" is 10e-6)', () => {
     expect(parseSpiceNumber('10uF')).toBeCloseTo(10e-6, 18);
     expect(parseSpiceNumber('0.45V')).toBe(0.45);
@@ -48,7 +55,7 @@ describe('parseModelCard: the accepted subset', () => {
     const [model] = card.sections[0].models;
     expect(model).toMatchObject({ name: 'nch', polarity: 'nmos', level: 54, version: '4.8.2' });
     expect(model.parameters.vth0).toBe(0.45);
-    expect(model.parameters.toxe).toBeCloseTo(4.1e-9, 20);
+    expect(model.parameters.toxe).toBe(4.1e-9);
     expect(model.parameters.u0).toBe(0.037);
     expect(model.parameters.vsat).toBe(90e3);
     expect(Object.keys(model.parameters)).toEqual(['vth0', 'toxe', 'u0', 'vsat']);

@@ -1,7 +1,8 @@
-/** SPICE scale suffixes (case-insensitive; "m" is milli, "meg" mega, "mil" a thousandth of an inch). */
-const SCALE: Record<string, number> = { t: 1e12, g: 1e9, meg: 1e6, k: 1e3, mil: 25.4e-6, m: 1e-3, u: 1e-6, n: 1e-9, p: 1e-12, f: 1e-15, a: 1e-18 };
+/** SPICE scale suffixes as powers of ten (case-insensitive; "m" is milli, "meg" mega); "mil" (25.4 µm) is apart. */
+const DECADES: Record<string, number> = { t: 12, g: 9, meg: 6, k: 3, m: -3, u: -6, n: -9, p: -12, f: -15, a: -18 };
+const MIL = 25.4e-6;
 
-const NUMBER = /^([+-]?(?:\d+\.?\d*|\.\d+)(?:e[+-]?\d+)?)(meg|mil|[tgkmunpfa])?([a-z]*)$/i;
+const NUMBER = /^([+-]?(?:\d+\.?\d*|\.\d+))(?:e([+-]?\d+))?(meg|mil|[tgkmunpfa])?([a-z]*)$/i;
 
 /**
  * A SPICE number ("1.2n", "3meg", "10u", "2.5e17", "0.45V") as a plain number, or undefined when the text is
@@ -10,7 +11,11 @@ const NUMBER = /^([+-]?(?:\d+\.?\d*|\.\d+)(?:e[+-]?\d+)?)(meg|mil|[tgkmunpfa])?(
 export function parseSpiceNumber(text: string): number | undefined {
   const match = NUMBER.exec(text);
   if (!match) return undefined;
-  const value = Number(match[1]) * (match[2] ? SCALE[match[2].toLowerCase()] : 1);
+  const [, mantissa, exponent, suffix] = match;
+  const scale = suffix?.toLowerCase();
+  // "4.1n" is read as 4.1e-9, the decimal it means, not 4.1 × 1e-9 (which is 4.0999999999999995e-9).
+  const decades = Number(exponent ?? 0) + (scale && scale !== 'mil' ? DECADES[scale] : 0);
+  const value = Number(`${mantissa}e${decades}`) * (scale === 'mil' ? MIL : 1);
   // Adding 0 turns −0 into 0, so that equal cards compare equal.
   return Number.isFinite(value) ? value + 0 : undefined;
 }
