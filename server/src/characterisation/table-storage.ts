@@ -1,0 +1,51 @@
+import { createHash } from 'node:crypto';
+import { promisify } from 'node:util';
+import { gunzip, gzip } from 'node:zlib';
+import { decodeTable, encodeTable, type LookupTable } from '@channelwright/shared/device';
+
+const compress = promisify(gzip);
+const decompress = promisify(gunzip);
+
+/** Hashing goes in slices of this many bytes with a turn of the event loop between them (a full grid is tens of MB). */
+const HASH_SLICE = 1 << 20;
+
+/** A table ready to store: its binary form gzip-compressed, and the SHA-256 of the uncompressed binary form. */
+export interface PackedTable {
+  compressed: Buffer;
+  sha256: string;
+  /** Bytes before compression. */
+  size: number;
+}
+
+/** SHA-256 (hex) of bytes, yielding to the event loop between slices. */
+export async function sha256Of(bytes: Uint8Array): Promise<string> {
+  const hash = createHash('sha256');
+  for (let start = 0; start < bytes.length; start += HASH_SLICE) {
+    hash.update(bytes.subarray(start, start + HASH_SLICE));
+    if (start + HASH_SLICE < bytes.length) await new Promise((resolve) => setImmediate(resolve));
+  }
+  return hash.digest('hex');
+}
+
+/** Encodes, hashes and compresses a table (zlib's gzip runs on libuv's thread pool, off the event loop). */
+export async function packTable(table: LookupTable): Promise<PackedTable> {
+  const bytes = encodeTable(table);
+  const [sha256, compressed] = await Promise.all([sha256Of(bytes), compress(bytes)]);
+  return { compressed, sha256, size: bytes.length };
+}
+
+/** Decompresses and decodes a stored table; refuses it (TABLE_CORRUPT) when its content no longer has the stored hash. */
+export async function unpackTable(compressed: Uint8Array, sha256: string): Promise<LookupTable> {
+  const bytes = await decompress(compressed);
+  const actual = await sha256Of(bytes);
+  if (actual !== sha256) throw new TableCorruptError(`The stored table's SHA-256 is ${actual}, not the recorded ${sha256}`);
+  return decodeTable(bytes);
+}
+
+export class TableCorruptError extends Error {
+  readonly code = 'TABLE_CORRUPT';
+  constructor(message: string) {
+    super(message);
+    this.name = 'TableCorruptError';
+  }
+}
