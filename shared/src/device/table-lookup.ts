@@ -97,16 +97,10 @@ function cubicStencil(axis: ArrayLike<number>, found: { i: number; t: number }):
   return { first, x, interval: found.i - first, t: found.t };
 }
 
-/** One characterised temperature and its weight, with the line offsets of its (length, VSB, VDS) stencil. */
-interface TemperatureTerm {
-  weight: number;
-  /** offsets[k][s][d] and the VDS weights, for length k and VSB s of the stencils. */
-  offsets: number[][][];
-}
-
 /**
  * The table along VGS at fixed corner, temperature, L, VDS and VSB: the "effective line" every lookup and
- * sizing works on. Node values are combined from the stored lines on demand and remembered.
+ * sizing works on. A node's value is combined from the stored lines of the stencils (temperature × length ×
+ * VSB × VDS, flattened) on demand; the ID and gm nodes, which the searches revisit, are remembered.
  */
 export class TableLine {
   readonly grid: TableGrid;
@@ -115,11 +109,14 @@ export class TableLine {
   /** The lowest and highest VGS node of the highest gm/ID among the stored lines this line is made of. */
   readonly gmIdPeakRange: readonly [number, number];
   private readonly columns: PreparedTable['columns'];
-  private readonly terms: TemperatureTerm[];
-  private readonly vdsWeights: number[];
+  /** Line offsets, temperature-major then length, VSB, VDS. */
+  private readonly offsets: Int32Array;
+  private readonly temperatureWeights: Float64Array;
+  private readonly vdsWeights: Float64Array;
   private readonly lengths: CubicStencil;
   private readonly vsb: CubicStencil;
-  private readonly cache = new Map<TableField, Float64Array>();
+  private idNodes: Float64Array | null = null;
+  private gmNodes: Float64Array | null = null;
   private readonly lengthValues = new Float64Array(4);
   private readonly vsbValues = new Float64Array(4);
   private readonly vgsX = new Float64Array(4);
@@ -128,7 +125,7 @@ export class TableLine {
   constructor(prepared: PreparedTable, conditions: TableConditions) {
     const { grid } = prepared;
     this.grid = grid;
-    this.conditions = conditions;
+    this.conditions = { corner: conditions.corner, temperature: conditions.temperature, l: conditions.l, vds: conditions.vds, vsb: conditions.vsb };
     this.columns = prepared.columns;
     const corner = grid.corners.findIndex((name) => name.toLowerCase() === conditions.corner.toLowerCase());
     if (corner < 0) throw new EngineError('CORNER_NOT_IN_TABLE', `Corner ${conditions.corner} is not in the table (characterised: ${grid.corners.join(', ')})`, 'corner');
@@ -153,23 +150,25 @@ export class TableLine {
     this.lengths = cubicStencil(prepared.lnLengths, length);
     this.vsb = cubicStencil(grid.vsb, vsb);
     const vdsTerms = linearWeights(vds);
-    this.vdsWeights = vdsTerms.map((term) => term.weight);
+    this.temperatureWeights = Float64Array.from(temperatures, (t) => t.weight);
+    this.vdsWeights = Float64Array.from(vdsTerms, (d) => d.weight);
+    this.offsets = new Int32Array(temperatures.length * this.lengths.x.length * this.vsb.x.length * vdsTerms.length);
     let low = grid.vgs.count;
     let high = 0;
-    this.terms = temperatures.map((t) => ({
-      weight: t.weight,
-      offsets: Array.from(this.lengths.x, (_x, k) =>
-        Array.from(this.vsb.x, (_y, s) =>
-          vdsTerms.map((d) => {
+    let at = 0;
+    for (const t of temperatures) {
+      for (let k = 0; k < this.lengths.x.length; k++) {
+        for (let s = 0; s < this.vsb.x.length; s++) {
+          for (const d of vdsTerms) {
             const offset = lineOffset(grid, corner, t.index, this.lengths.first + k, this.vsb.first + s, d.index);
             const peak = prepared.gmIdPeaks[offset / grid.vgs.count];
             low = Math.min(low, peak);
             high = Math.max(high, peak);
-            return offset;
-          }),
-        ),
-      ),
-    }));
+            this.offsets[at++] = offset;
+          }
+        }
+      }
+    }
     this.gmIdPeakRange = [low, high];
   }
 
@@ -179,31 +178,37 @@ export class TableLine {
 
   /** The value of a field at VGS node g, in the interpolation domain (the logarithm for ID, gm, gds, gmb, Cgg). */
   node(field: TableField, g: number): number {
-    let nodes = this.cache.get(field);
+    if (field !== 'id' && field !== 'gm') return this.combine(this.columns[field], g);
+    let nodes = field === 'id' ? this.idNodes : this.gmNodes;
     if (!nodes) {
       nodes = new Float64Array(this.count).fill(Number.NaN);
-      this.cache.set(field, nodes);
+      if (field === 'id') this.idNodes = nodes;
+      else this.gmNodes = nodes;
     }
     const known = nodes[g];
     if (known === known) return known;
-    const column = this.columns[field];
-    const weights = this.vdsWeights;
-    const { lengthValues, vsbValues, lengths, vsb } = this;
+    return (nodes[g] = this.combine(this.columns[field], g));
+  }
+
+  /** Node g of a column through the stencils: linear in VDS, monotone cubic in VSB then in ln L, linear in temperature. */
+  private combine(column: Float32Array | Float64Array, g: number): number {
+    const { offsets, vdsWeights, lengthValues, vsbValues, lengths, vsb } = this;
+    const nK = lengths.x.length;
+    const nS = vsb.x.length;
+    const nD = vdsWeights.length;
+    let at = 0;
     let total = 0;
-    for (const term of this.terms) {
-      for (let k = 0; k < term.offsets.length; k++) {
-        const byVsb = term.offsets[k];
-        for (let s = 0; s < byVsb.length; s++) {
-          const offsets = byVsb[s];
+    for (let t = 0; t < this.temperatureWeights.length; t++) {
+      for (let k = 0; k < nK; k++) {
+        for (let s = 0; s < nS; s++) {
           let value = 0;
-          for (let d = 0; d < offsets.length; d++) value += weights[d] * column[offsets[d] + g];
+          for (let d = 0; d < nD; d++) value += vdsWeights[d] * column[offsets[at++] + g];
           vsbValues[s] = value;
         }
-        lengthValues[k] = monotoneCubicAt(vsb.x, vsbValues, byVsb.length, vsb.interval, vsb.t);
+        lengthValues[k] = nS === 1 ? vsbValues[0] : monotoneCubicAt(vsb.x, vsbValues, nS, vsb.interval, vsb.t);
       }
-      total += term.weight * monotoneCubicAt(lengths.x, lengthValues, term.offsets.length, lengths.interval, lengths.t);
+      total += this.temperatureWeights[t] * (nK === 1 ? lengthValues[0] : monotoneCubicAt(lengths.x, lengthValues, nK, lengths.interval, lengths.t));
     }
-    nodes[g] = total;
     return total;
   }
 

@@ -40,8 +40,14 @@ export function operatingPointOnLine(line: TableLine, w: number, vgs: number): T
   const gds = line.valueAt('gds', vgs) * scale;
   const cgg = line.valueAt('cgg', vgs) * scale;
   const vt = line.valueAt('vt', vgs);
+  const { corner, temperature, l, vds, vsb } = line.conditions;
+  // Properties written out, not spread: an object spread here costs more than all the interpolation.
   return {
-    ...line.conditions,
+    corner,
+    temperature,
+    l,
+    vds,
+    vsb,
     w,
     vgs,
     id,
@@ -60,12 +66,11 @@ export function operatingPointOnLine(line: TableLine, w: number, vgs: number): T
     cgd: line.valueAt('cgd', vgs) * scale,
     cgb: line.valueAt('cgb', vgs) * scale,
     ft: gm / (2 * Math.PI * cgg),
-    warnings: [...line.warnings],
+    warnings: line.warnings.slice(),
   };
 }
 
 /** The operating point of a device of width w (m) at vgs (V) under these conditions, from the table. */
 export function tableOperatingPoint(prepared: PreparedTable, device: TableConditions & { w: number; vgs: number }): TableOperatingPoint {
-  const { w, vgs, ...conditions } = device;
-  return operatingPointOnLine(tableLine(prepared, conditions), w, vgs);
+  return operatingPointOnLine(tableLine(prepared, device), device.w, device.vgs);
 }

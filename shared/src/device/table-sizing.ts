@@ -49,7 +49,9 @@ export function sizeFromTable(prepared: PreparedTable, target: TableSizeTarget):
   if (!(w <= MAX_WIDTH)) {
     throw new EngineError('W_TOO_LARGE', `This target needs W = ${say(w, 'm')}, more than ${say(MAX_WIDTH, 'm')}; raise the overdrive or lower gm/ID`, constraint);
   }
-  return { ...operatingPointOnLine(line, w, vgs), constraint };
+  const sizing = operatingPointOnLine(line, w, vgs) as TableSizing;
+  sizing.constraint = constraint;
+  return sizing;
 }
 
 /** VGS with VGS − VT(VGS) = vov (VT hardly depends on VGS: three fixed-point steps settle it). */
