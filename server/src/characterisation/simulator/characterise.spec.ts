@@ -141,7 +141,7 @@ describeWithNgspice('characterise on ngspice (Debian ngspice 39 native, ngspice 
   it('refuses a run whose sweep is not the grid VGS axis', () => {
     const g = grid('nmos');
     const columns = tables['nmos-native'].columns;
-    const sweep = { netlist: '', nonce: 'x', instances: [{ length: 0, vsb: 0, vds: 0 }], vectors: [] };
+    const sweep = { netlist: '', nonce: 'x', instances: [{ length: 0, vsb: 0, vds: 0 }], vectors: [], scales: [] };
     const data = new Float64Array(11 * g.vgs.count);
     for (let k = 0; k < g.vgs.count; k++) data[k] = vgsOfNode(g.vgs, k) + (k === 7 ? 1e-3 : 0);
     expect(() => storeSweep(columns, g, { corner: 0, temperature: 0, lengths: [0] }, sweep, 'bsim4', { points: g.vgs.count, data, messages: '' })).toThrow(/sweep point 7/);

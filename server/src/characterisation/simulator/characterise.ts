@@ -1,4 +1,5 @@
 import { randomUUID } from 'node:crypto';
+import { setMaxListeners } from 'node:events';
 import { checkTableGrid, type LookupTable, TABLE_FIELDS, type TableGrid, tablePointCount } from '@channelwright/shared/device';
 import type { ModelCard, ModelStatement } from '@channelwright/shared/model-card';
 import { CharacterisationError } from './characterisation-error.js';
@@ -82,6 +83,8 @@ export async function characterise(input: CharacterisationInput, options: Charac
   const chunks = planChunks(grid, options.instancesPerRun);
 
   const stop = new AbortController();
+  // Every queued run listens to this signal (piscina adds one listener per task).
+  setMaxListeners(chunks.length + 10, stop.signal);
   const abort = () => stop.abort(options.signal?.reason);
   if (options.signal?.aborted) throw new CharacterisationError('CHARACTERISATION_CANCELLED', 'The characterisation was cancelled');
   options.signal?.addEventListener('abort', abort, { once: true });
@@ -110,7 +113,7 @@ async function runChunk(input: CharacterisationInput, model: ModelStatement, fam
   const where = `corner ${grid.corners[chunk.corner]}, ${grid.temperatures[chunk.temperature]} °C, L = ${chunk.lengths.map((k) => grid.lengths[k]).join(', ')} m`;
   let result;
   try {
-    result = await options.pool.run({ engine: options.engine, netlist: sweep.netlist, nonce: sweep.nonce, vectors: sweep.vectors, timeoutMs: options.timeoutMs ?? DEFAULT_TIMEOUT_MS }, signal);
+    result = await options.pool.run({ engine: options.engine, netlist: sweep.netlist, nonce: sweep.nonce, vectors: sweep.vectors, scales: sweep.scales, timeoutMs: options.timeoutMs ?? DEFAULT_TIMEOUT_MS }, signal);
   } catch (error) {
     if (signal.aborted) throw signal.reason instanceof Error ? signal.reason : new CharacterisationError('CHARACTERISATION_CANCELLED', 'The characterisation was cancelled');
     throw new CharacterisationError('SIMULATION_FAILED', `The simulation of ${model.name} (${where}) failed: ${error instanceof Error ? error.message : String(error)}`);

@@ -14,8 +14,9 @@ const WASM_RUNS_PER_START = 200;
 const MESSAGE_LIMIT = 2000;
 
 /**
- * @param {{ engine: 'native' | 'wasm', netlist: string, nonce: string, vectors: string[], timeoutMs: number, ngspice?: string }} task
- * @returns {Promise<{ points: number, data: Float64Array, messages: string }>} data vector-major: vectors[j] at point i is data[j * points + i]
+ * @param {{ engine: 'native' | 'wasm', netlist: string, nonce: string, vectors: string[], scales?: number[], timeoutMs: number, ngspice?: string }} task
+ * @returns {Promise<{ points: number, data: Float64Array, messages: string }>} data vector-major: vectors[j] at point i is data[j * points + i],
+ *   multiplied by scales[j] when given (so that sign conventions cost the main thread nothing)
  */
 export default async function runSimulation(task) {
   return task.engine === 'native' ? runNative(task) : runWasm(task);
@@ -37,7 +38,7 @@ async function runNative(task) {
     const raw = readRawFile(bytes);
     if (!raw.title.includes(task.nonce)) throw new Error('ngspice returned the results of another netlist');
     const columns = raw.names.map(canonicalVectorName);
-    return extract(task.vectors, raw.points, (name) => {
+    return extract(task, raw.points, (name) => {
       const j = columns.indexOf(name);
       if (j < 0) return null;
       const column = new Float64Array(raw.points);
@@ -86,17 +87,19 @@ async function runWasm(task) {
   }
   if (result.dataType !== 'real') throw new Error('The WebAssembly ngspice returned complex data for a DC sweep');
   const byName = new Map(result.data.map((vector) => [canonicalVectorName(vector.name), vector.values]));
-  return extract(task.vectors, result.numPoints, (name) => {
+  return extract(task, result.numPoints, (name) => {
     const values = byName.get(name);
     return values ? Float64Array.from(values) : null;
   }, messages);
 }
 
-function extract(vectors, points, column, messages) {
-  const data = new Float64Array(vectors.length * points);
-  vectors.forEach((name, j) => {
+function extract(task, points, column, messages) {
+  const data = new Float64Array(task.vectors.length * points);
+  task.vectors.forEach((name, j) => {
     const values = column(canonicalVectorName(name));
     if (!values) throw new Error(`The simulator returned no vector ${name}. ${messages}`);
+    const scale = task.scales?.[j] ?? 1;
+    if (scale !== 1) for (let i = 0; i < points; i++) values[i] *= scale;
     data.set(values, j * points);
   });
   return { points, data, messages };

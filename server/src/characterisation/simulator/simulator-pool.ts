@@ -12,6 +12,8 @@ export interface SimulationRequest {
   netlist: string;
   nonce: string;
   vectors: string[];
+  /** Factors the worker multiplies each vector by (default 1). */
+  scales?: number[];
   /** The run is stopped after this long, ms. */
   timeoutMs: number;
 }

@@ -1,6 +1,6 @@
 import type { TableGrid } from '@channelwright/shared/device';
 import { parseModelCard } from '@channelwright/shared/model-card';
-import { buildSweepNetlist, instanceVectors, modelFamily } from './sweep-netlist.js';
+import { buildSweepNetlist, instanceScales, instanceVectors, modelFamily } from './sweep-netlist.js';
 
 const card = parseModelCard(['* uploaded comment line', '.lib tt', '.model pch pmos (level=54 version=4.8.2 vth0=-0.45 toxe=4.1n) ; tail comment', '.endl tt'].join('\n'));
 const model = card.sections[0].models[0];
@@ -48,6 +48,14 @@ describe('buildSweepNetlist', () => {
     expect(sweep.vectors[0]).toBe('v(v-sweep)');
     expect(sweep.vectors.slice(1, 11)).toEqual(['i(vd0)', '@m0[gm]', '@m0[gds]', '@m0[gmbs]', '@m0[vth]', '@m0[vdsat]', '@m0[cgg]', '@m0[cgs]', '@m0[cgd]', '@m0[cgb]']);
     expect(lines.filter((line) => line.startsWith('.save'))).toHaveLength(12);
+  });
+
+  it('has the worker make the answers polarity-normalised: VGS and ID positive for a conducting PMOS, Cgs, Cgd, Cgb as −∂Qg/∂V', () => {
+    expect(sweep.scales).toHaveLength(sweep.vectors.length);
+    expect(sweep.scales[0]).toBe(-1);
+    expect(sweep.scales.slice(1, 11)).toEqual([1, 1, 1, 1, 1, 1, 1, -1, -1, -1]);
+    expect(instanceScales('bsim4', 1)[0]).toBe(-1);
+    expect(instanceScales('bsim3', 1)).toHaveLength(9);
   });
 
   it('reads no cgb from a BSIM3 model, which has no such output', () => {

@@ -26,6 +26,8 @@ export interface SweepNetlist {
   instances: SweepInstance[];
   /** The vectors to read back: the sweep itself, then per instance the ones of instanceVectors. */
   vectors: string[];
+  /** What the worker multiplies each vector by to make it polarity-normalised (see instanceScales). */
+  scales: number[];
 }
 
 /** The simulator options of every run: tolerances tightened so that sub-nA currents converge (shared/reference: default abstol 1e-12 A stops after one Newton step there). */
@@ -46,6 +48,16 @@ export function instanceVectors(family: ModelFamily, k: number): string[] {
   return [`i(vd${k})`, ...outputs.map((name) => `@m${k}[${name}]`)];
 }
 
+/**
+ * Factors that make an instance's vectors polarity-normalised: ID = −type·i(vd) (the drain source's current
+ * flows into the drain of a conducting NMOS, out of that of a PMOS); gm, gds, gmbs, vth, vdsat and cgg as
+ * ngspice reports them (n-normalised for BSIM3/BSIM4, so positive for a PMOS); Cgx = −(reported cgx) for
+ * x = s, d, b, because BSIM reports cgx = ∂Qg/∂Vx, which is negative, so that Cgs + Cgd + Cgb = Cgg.
+ */
+export function instanceScales(family: ModelFamily, sign: number): number[] {
+  return [-sign, 1, 1, 1, 1, 1, 1, -1, -1, ...(family === 'bsim4' ? [-1] : [])];
+}
+
 /** The sweep vector as both ngspice builds name it. */
 export const SWEEP_VECTOR = 'v(v-sweep)';
 
@@ -62,6 +74,7 @@ export function buildSweepNetlist(model: ModelStatement, family: ModelFamily, gr
   grid.vsb.forEach((vsb, s) => lines.push(`vb${s} b${s} 0 ${spiceNumber(-sign * vsb)}`));
   const instances: SweepInstance[] = [];
   const vectors = [SWEEP_VECTOR];
+  const scales = [sign];
   for (const length of chunk.lengths) {
     for (let s = 0; s < grid.vsb.length; s++) {
       for (let d = 0; d < grid.vds.length; d++) {
@@ -69,6 +82,7 @@ export function buildSweepNetlist(model: ModelStatement, family: ModelFamily, gr
         instances.push({ length, vsb: s, vds: d });
         lines.push(`vd${k} d${k} 0 ${spiceNumber(sign * grid.vds[d])}`, `m${k} d${k} g 0 b${s} ${model.name} w=${spiceNumber(grid.referenceWidth)} l=${spiceNumber(grid.lengths[length])}`);
         vectors.push(...instanceVectors(family, k));
+        scales.push(...instanceScales(family, sign));
       }
     }
   }
@@ -76,5 +90,5 @@ export function buildSweepNetlist(model: ModelStatement, family: ModelFamily, gr
   // ngspice reads long lines fine; one .save per instance keeps them readable.
   for (let k = 0; k < instances.length; k++) lines.push(`.save ${instanceVectors(family, k).join(' ')}`);
   lines.push('.end', '');
-  return { netlist: lines.join('\n'), nonce, instances, vectors };
+  return { netlist: lines.join('\n'), nonce, instances, vectors, scales };
 }
