@@ -2,6 +2,7 @@ import { createHash } from 'node:crypto';
 import { promisify } from 'node:util';
 import { gunzip, gzip } from 'node:zlib';
 import { decodeTable, encodeTable, type LookupTable } from '@channelwright/shared/device';
+import { shuffleBytes, unshuffleBytes } from './byte-shuffle.js';
 
 const compress = promisify(gzip);
 const decompress = promisify(gunzip);
@@ -9,7 +10,10 @@ const decompress = promisify(gunzip);
 /** Hashing goes in slices of this many bytes with a turn of the event loop between them (a full grid is tens of MB). */
 const HASH_SLICE = 1 << 20;
 
-/** A table ready to store: its binary form gzip-compressed, and the SHA-256 of the uncompressed binary form. */
+/** Bytes of one element for the shuffle filter (Float32 columns). */
+const ELEMENT = 4;
+
+/** A table ready to store: its binary form byte-shuffled and gzip-compressed, and the SHA-256 of the binary form itself. */
 export interface PackedTable {
   compressed: Buffer;
   sha256: string;
@@ -27,16 +31,17 @@ export async function sha256Of(bytes: Uint8Array): Promise<string> {
   return hash.digest('hex');
 }
 
-/** Encodes, hashes and compresses a table (zlib's gzip runs on libuv's thread pool, off the event loop). */
+/** Encodes, hashes, shuffles and compresses a table (zlib's gzip runs on libuv's thread pool, off the event loop). */
 export async function packTable(table: LookupTable): Promise<PackedTable> {
   const bytes = encodeTable(table);
-  const [sha256, compressed] = await Promise.all([sha256Of(bytes), compress(bytes)]);
+  const sha256 = await sha256Of(bytes);
+  const compressed = await compress(await shuffleBytes(bytes, ELEMENT));
   return { compressed, sha256, size: bytes.length };
 }
 
 /** Decompresses and decodes a stored table; refuses it (TABLE_CORRUPT) when its content no longer has the stored hash. */
 export async function unpackTable(compressed: Uint8Array, sha256: string): Promise<LookupTable> {
-  const bytes = await decompress(compressed);
+  const bytes = await unshuffleBytes(await decompress(compressed), ELEMENT);
   const actual = await sha256Of(bytes);
   if (actual !== sha256) throw new TableCorruptError(`The stored table's SHA-256 is ${actual}, not the recorded ${sha256}`);
   return decodeTable(bytes);
