@@ -137,7 +137,7 @@ export class TableLine {
       const [a, b] = temperatures.map((term) => grid.temperatures[term.index]);
       this.warnings.push({
         code: 'TEMPERATURE_INTERPOLATED',
-        message: `${say(conditions.temperature, '°C')} was not characterised: the table is interpolated linearly between ${say(a, '°C')} and ${say(b, '°C')}`,
+        message: `${say(conditions.temperature, '°C')} was not characterised: the table is interpolated linearly between ${say(a, '°C')} and ${say(b, '°C')}; in weak inversion ID at a given VGS can be tens of percent off (gm/ID about 2 %), so characterise this temperature for numbers you sign off`,
       });
     }
     const length = conditions.l > 0 ? bracket(prepared.lnLengths, Math.log(conditions.l), ON_GRID) : null;
