@@ -6,7 +6,8 @@ import { describeWithNgspice, requireNativeNgspice } from '../../../test/helpers
 import { type CharacterisationInput, characterise, planChunks } from './characterise.js';
 import type { SimulationRequest, SimulatorPool } from './simulator-pool.js';
 import { SimulatorPool as Pool } from './simulator-pool.js';
-import { storeSweep } from './store-sweep.js';
+import { finishSweep, sweepPlacements } from './store-sweep.js';
+import { buildSweepNetlist } from './sweep-netlist.js';
 
 const cards = join(__dirname, '../../../test/fixtures/model-cards');
 const card250 = parseModelCard(readFileSync(join(cards, 'test-250nm.lib'), 'utf8'));
@@ -142,10 +143,25 @@ describeWithNgspice('characterise on ngspice (Debian ngspice 39 native, ngspice 
     const g = grid('nmos');
     const columns = tables['nmos-native'].columns;
     const sweep = { netlist: '', nonce: 'x', instances: [{ length: 0, vsb: 0, vds: 0 }], vectors: [], scales: [] };
-    const data = new Float64Array(11 * g.vgs.count);
+    const data = new Float64Array(g.vgs.count);
     for (let k = 0; k < g.vgs.count; k++) data[k] = vgsOfNode(g.vgs, k) + (k === 7 ? 1e-3 : 0);
-    expect(() => storeSweep(columns, g, { corner: 0, temperature: 0, lengths: [0] }, sweep, 'bsim4', { points: g.vgs.count, data, messages: '' })).toThrow(/sweep point 7/);
-    expect(() => storeSweep(columns, g, { corner: 0, temperature: 0, lengths: [0] }, sweep, 'bsim4', { points: 50, data, messages: '' })).toThrow(/50 VGS points/);
+    expect(() => finishSweep(columns, g, { corner: 0, temperature: 0, lengths: [0] }, sweep, 'bsim4', { points: g.vgs.count, data, messages: '' })).toThrow(/sweep point 7/);
+    expect(() => finishSweep(columns, g, { corner: 0, temperature: 0, lengths: [0] }, sweep, 'bsim4', { points: 50, data, messages: '' })).toThrow(/50 VGS points/);
+  });
+
+  it('places every instance line of a run at its own offset of its own column', () => {
+    const g = grid('nmos');
+    const chunk = { corner: 1, temperature: 1, lengths: [1, 2] };
+    const sweep = buildSweepNetlist(card250.sections[0].models[0], 'bsim4', g, chunk, 'x');
+    const placements = sweepPlacements(g, chunk, sweep, 'bsim4');
+    expect(placements).toHaveLength(3 * sweep.instances.length * 10);
+    const targets = new Set<string>();
+    for (let p = 0; p < placements.length; p += 3) {
+      expect(sweep.vectors[placements[p]]).toMatch(/^(i\(vd\d+\)|@m\d+\[\w+\])$/);
+      targets.add(`${placements[p + 1]}:${placements[p + 2]}`);
+    }
+    expect(targets.size).toBe(placements.length / 3);
+    expect(placements.slice(0, 3)).toEqual([1, 0, lineOffset(g, 1, 1, 1, 0, 0)]);
   });
 
   it('fails with the simulator message when ngspice refuses the model, and keeps no table', async () => {

@@ -4,7 +4,7 @@ import { checkTableGrid, type LookupTable, TABLE_FIELDS, type TableGrid, tablePo
 import type { ModelCard, ModelStatement } from '@channelwright/shared/model-card';
 import { CharacterisationError } from './characterisation-error.js';
 import type { SimulatorEngine, SimulatorPool } from './simulator-pool.js';
-import { storeSweep } from './store-sweep.js';
+import { finishSweep, sweepPlacements } from './store-sweep.js';
 import { buildSweepNetlist, type ModelFamily, modelFamily, type SweepChunk } from './sweep-netlist.js';
 
 /** What to characterise: a parsed card, the grid of one model (grid.modelName) and where each corner's models are. */
@@ -78,8 +78,10 @@ export async function characterise(input: CharacterisationInput, options: Charac
     return family;
   });
   const points = tablePointCount(grid);
-  const Column = options.precision === 'float64' ? Float64Array : Float32Array;
-  const columns = Object.fromEntries(TABLE_FIELDS.map((field) => [field, new Column(points)])) as LookupTable['columns'];
+  // Shared memory: the worker threads write their lines into the columns themselves (store-sweep.ts).
+  const type = options.precision === 'float64' ? 'float64' : 'float32';
+  const buffers = TABLE_FIELDS.map(() => new SharedArrayBuffer(points * (type === 'float64' ? 8 : 4)));
+  const columns = Object.fromEntries(TABLE_FIELDS.map((field, i) => [field, type === 'float64' ? new Float64Array(buffers[i]) : new Float32Array(buffers[i])])) as LookupTable['columns'];
   const chunks = planChunks(grid, options.instancesPerRun);
 
   const stop = new AbortController();
@@ -90,7 +92,7 @@ export async function characterise(input: CharacterisationInput, options: Charac
   options.signal?.addEventListener('abort', abort, { once: true });
   let done = 0;
   try {
-    await Promise.all(chunks.map((chunk) => runChunk(input, models[chunk.corner], families[chunk.corner], chunk, columns, options, stop.signal).then((stored) => {
+    await Promise.all(chunks.map((chunk) => runChunk(input, models[chunk.corner], families[chunk.corner], chunk, { columns, buffers, type }, options, stop.signal).then((stored) => {
       if (stop.signal.aborted) return;
       done += stored;
       options.onProgress?.({ done, total: points });
@@ -107,17 +109,24 @@ export async function characterise(input: CharacterisationInput, options: Charac
   return { grid, columns };
 }
 
-async function runChunk(input: CharacterisationInput, model: ModelStatement, family: ModelFamily, chunk: SweepChunk, columns: LookupTable['columns'], options: CharacteriseOptions, signal: AbortSignal): Promise<number> {
+interface SharedColumns {
+  columns: LookupTable['columns'];
+  buffers: SharedArrayBuffer[];
+  type: 'float32' | 'float64';
+}
+
+async function runChunk(input: CharacterisationInput, model: ModelStatement, family: ModelFamily, chunk: SweepChunk, shared: SharedColumns, options: CharacteriseOptions, signal: AbortSignal): Promise<number> {
   const { grid } = input;
   const sweep = buildSweepNetlist(model, family, grid, chunk, randomUUID());
   const where = `corner ${grid.corners[chunk.corner]}, ${grid.temperatures[chunk.temperature]} °C, L = ${chunk.lengths.map((k) => grid.lengths[k]).join(', ')} m`;
   let result;
   try {
-    result = await options.pool.run({ engine: options.engine, netlist: sweep.netlist, nonce: sweep.nonce, vectors: sweep.vectors, scales: sweep.scales, timeoutMs: options.timeoutMs ?? DEFAULT_TIMEOUT_MS }, signal);
+    const store = { columns: shared.buffers, type: shared.type, placements: sweepPlacements(grid, chunk, sweep, family) };
+    result = await options.pool.run({ engine: options.engine, netlist: sweep.netlist, nonce: sweep.nonce, vectors: sweep.vectors, scales: sweep.scales, store, timeoutMs: options.timeoutMs ?? DEFAULT_TIMEOUT_MS }, signal);
   } catch (error) {
     if (signal.aborted) throw signal.reason instanceof Error ? signal.reason : new CharacterisationError('CHARACTERISATION_CANCELLED', 'The characterisation was cancelled');
     throw new CharacterisationError('SIMULATION_FAILED', `The simulation of ${model.name} (${where}) failed: ${error instanceof Error ? error.message : String(error)}`);
   }
-  storeSweep(columns, grid, chunk, sweep, family, result);
+  finishSweep(shared.columns, grid, chunk, sweep, family, result);
   return sweep.instances.length * grid.vgs.count;
 }

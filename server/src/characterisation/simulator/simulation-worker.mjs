@@ -4,7 +4,7 @@
 // compiles TypeScript in memory) and in the built server; simulator-pool.ts explains where it is found.
 import { spawn } from 'node:child_process';
 import { mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
+import { setPriority, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { canonicalVectorName, readRawFile } from './read-raw-file.mjs';
 
@@ -14,9 +14,12 @@ const WASM_RUNS_PER_START = 200;
 const MESSAGE_LIMIT = 2000;
 
 /**
- * @param {{ engine: 'native' | 'wasm', netlist: string, nonce: string, vectors: string[], scales?: number[], timeoutMs: number, ngspice?: string }} task
- * @returns {Promise<{ points: number, data: Float64Array, messages: string }>} data vector-major: vectors[j] at point i is data[j * points + i],
- *   multiplied by scales[j] when given (so that sign conventions cost the main thread nothing)
+ * Each vector is multiplied by scales[j] when given. A vector named in `store.placements` (triples: vector
+ * index, column index, offset) is written straight into that shared column at that offset, so that the main
+ * thread neither receives nor copies it; the others come back in `data`, vector-major, in their order.
+ * @param {{ engine: 'native' | 'wasm', netlist: string, nonce: string, vectors: string[], scales?: number[], timeoutMs: number, ngspice?: string,
+ *   store?: { columns: SharedArrayBuffer[], type: 'float32' | 'float64', placements: number[] } }} task
+ * @returns {Promise<{ points: number, data: Float64Array, messages: string }>}
  */
 export default async function runSimulation(task) {
   return task.engine === 'native' ? runNative(task) : runWasm(task);
@@ -54,6 +57,14 @@ async function runNative(task) {
 function runProcess(command, args, cwd, timeoutMs) {
   return new Promise((resolve, reject) => {
     const child = spawn(command, args, { cwd, env: { PATH: process.env.PATH ?? '/usr/bin:/bin', HOME: cwd, LANG: 'C' }, timeout: timeoutMs, killSignal: 'SIGKILL', stdio: ['ignore', 'pipe', 'pipe'] });
+    // Below the server in priority, like the worker threads (simulator-pool.ts).
+    if (child.pid !== undefined) {
+      try {
+        setPriority(child.pid, 10);
+      } catch {
+        // Not allowed here: it runs at normal priority.
+      }
+    }
     const chunks = [];
     child.stdout.on('data', (chunk) => chunks.push(chunk));
     child.stderr.on('data', (chunk) => chunks.push(chunk));
@@ -94,13 +105,20 @@ async function runWasm(task) {
 }
 
 function extract(task, points, column, messages) {
-  const data = new Float64Array(task.vectors.length * points);
+  const placed = new Map();
+  const store = task.store;
+  if (store) for (let p = 0; p < store.placements.length; p += 3) placed.set(store.placements[p], p);
+  const views = store ? store.columns.map((buffer) => (store.type === 'float64' ? new Float64Array(buffer) : new Float32Array(buffer))) : [];
+  const data = new Float64Array((task.vectors.length - placed.size) * points);
+  let returned = 0;
   task.vectors.forEach((name, j) => {
     const values = column(canonicalVectorName(name));
     if (!values) throw new Error(`The simulator returned no vector ${name}. ${messages}`);
     const scale = task.scales?.[j] ?? 1;
     if (scale !== 1) for (let i = 0; i < points; i++) values[i] *= scale;
-    data.set(values, j * points);
+    const p = placed.get(j);
+    if (p === undefined) data.set(values, points * returned++);
+    else views[store.placements[p + 1]].set(values, store.placements[p + 2]);
   });
   return { points, data, messages };
 }

@@ -14,13 +14,15 @@ export interface SimulationRequest {
   vectors: string[];
   /** Factors the worker multiplies each vector by (default 1). */
   scales?: number[];
+  /** Vectors the worker writes straight into shared columns (triples: vector index, column index, offset) instead of returning them. */
+  store?: { columns: SharedArrayBuffer[]; type: 'float32' | 'float64'; placements: number[] };
   /** The run is stopped after this long, ms. */
   timeoutMs: number;
 }
 
 export interface SimulationResult {
   points: number;
-  /** Vector-major: vectors[j] at point i is data[j·points + i]. */
+  /** The vectors not stored into shared columns, vector-major: the j-th of them at point i is data[j·points + i]. */
   data: Float64Array;
   /** The simulator's warning and error lines. */
   messages: string;
@@ -56,6 +58,8 @@ export class SimulatorPool {
       maxThreads: this.threads,
       // Workers stay a while: a WebAssembly simulator takes about 1.5 s to start.
       idleTimeout: 60_000,
+      // Simulations run at a lower priority than the server's own thread, so that requests keep being answered (needs the optional @napi-rs/nice; without it they run at normal priority).
+      niceIncrement: 10,
     });
     this.ngspice = options.ngspice;
   }
