@@ -6,6 +6,8 @@ import {
   defaultTableGrid,
   encodeTable,
   isEngineError,
+  MonotoneCubic,
+  monotoneCubicAt,
   type LookupTable,
   prepareTable,
   TABLE_FIELDS,
@@ -224,5 +226,25 @@ describe('defaultTableGrid', () => {
   it('can start VGS below 0 for a depletion-mode device', () => {
     const grid = defaultTableGrid({ polarity: 'nmos', modelName: 'na', vdd: 1.2, lmin: 0.5e-6, corners: ['tt'], temperatures: [27], vgsFrom: -0.4, vgsStep: 0.02 });
     expect(grid.vgs).toEqual({ start: -0.4, step: 0.02, count: 81 });
+  });
+});
+
+describe('MonotoneCubic', () => {
+  it('gives what monotoneCubicAt gives, for every stencil size, interval and fraction (Fritsch & Carlson, 1980)', () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.double({ min: 0.01, max: 2, noNaN: true }), { minLength: 3, maxLength: 3 }),
+        fc.array(fc.double({ min: -5, max: 5, noNaN: true }), { minLength: 4, maxLength: 4 }),
+        fc.integer({ min: 1, max: 4 }),
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        fc.integer({ min: 0, max: 2 }),
+        (widths, y, n, t, interval) => {
+          const x = [0, widths[0], widths[0] + widths[1], widths[0] + widths[1] + widths[2]];
+          const i = n === 1 ? 0 : Math.min(interval, n - 2);
+          const expected = monotoneCubicAt(x, y, n, i, n === 1 ? 0 : t);
+          expect(new MonotoneCubic(x, n, i, n === 1 ? 0 : t).at(y)).toBeCloseTo(expected, 10);
+        },
+      ),
+    );
   });
 });

@@ -56,3 +56,51 @@ function slopeAt(x: ArrayLike<number>, y: ArrayLike<number>, n: number, k: numbe
   const hr = x[k + 1] - x[k];
   return interiorSlope(hl, (y[k] - y[k - 1]) / hl, hr, (y[k + 1] - y[k]) / hr);
 }
+
+/**
+ * The same interpolant with everything that depends only on x and t worked out once: for a stencil of up to
+ * four grid values that many lines share (the lengths and VSB values around a query), so that each line costs
+ * only its secants and slopes.
+ */
+export class MonotoneCubic {
+  private readonly n: number;
+  private readonly i: number;
+  private readonly t: number;
+  private readonly widths: Float64Array;
+  private readonly inverseWidths: Float64Array;
+  private readonly basis: Float64Array;
+
+  /** x[0..n−1] ascending (n ≤ 4), evaluation in the interval [x[i], x[i+1]] at fraction t. */
+  constructor(x: ArrayLike<number>, n: number, i: number, t: number) {
+    this.n = n;
+    this.i = i;
+    this.t = t;
+    this.widths = new Float64Array(Math.max(0, n - 1));
+    for (let k = 0; k < n - 1; k++) this.widths[k] = x[k + 1] - x[k];
+    this.inverseWidths = this.widths.map((w) => 1 / w);
+    const h = n > 1 ? this.widths[i] : 0;
+    const t2 = t * t;
+    const t3 = t2 * t;
+    this.basis = Float64Array.of(2 * t3 - 3 * t2 + 1, -2 * t3 + 3 * t2, (t3 - 2 * t2 + t) * h, (t3 - t2) * h);
+  }
+
+  /** The interpolant through y[0..n−1] at the stencil's point. */
+  at(y: ArrayLike<number>): number {
+    const { n, i, widths: w, inverseWidths: inverse, basis: b } = this;
+    if (n === 1) return y[0];
+    if (n === 2) return y[0] + this.t * (y[1] - y[0]);
+    const d = (y[i + 1] - y[i]) * inverse[i];
+    let s0: number;
+    let s1: number;
+    if (i === 0) {
+      const d1 = (y[2] - y[1]) * inverse[1];
+      s0 = endSlope(w[0], d, w[1], d1);
+      s1 = interiorSlope(w[0], d, w[1], d1);
+    } else {
+      const dl = (y[i] - y[i - 1]) * inverse[i - 1];
+      s0 = interiorSlope(w[i - 1], dl, w[i], d);
+      s1 = i + 1 === n - 1 ? endSlope(w[i], d, w[i - 1], dl) : interiorSlope(w[i], d, w[i + 1], (y[i + 2] - y[i + 1]) * inverse[i + 1]);
+    }
+    return b[0] * y[i] + b[1] * y[i + 1] + b[2] * s0 + b[3] * s1;
+  }
+}

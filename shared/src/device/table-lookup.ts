@@ -1,6 +1,6 @@
 import { EngineError } from './errors.js';
 import { checkLookupTable, lineOffset, type LookupTable, TABLE_FIELDS, type TableField, type TableGrid, type TableWarning, vgsOfNode } from './lookup-table.js';
-import { monotoneCubicAt } from './monotone-cubic.js';
+import { MonotoneCubic, monotoneCubicAt } from './monotone-cubic.js';
 import { say } from './say.js';
 
 /**
@@ -81,12 +81,11 @@ function linearWeights(found: { i: number; t: number }): { index: number; weight
   return found.t === 0 ? [{ index: found.i, weight: 1 }] : [{ index: found.i, weight: 1 - found.t }, { index: found.i + 1, weight: found.t }];
 }
 
-/** The grid values a monotone cubic needs around a bracket: up to two on each side, and where the bracket sits among them. */
+/** The grid values a monotone cubic needs around a bracket (up to two on each side) and its evaluator there. */
 interface CubicStencil {
   first: number;
-  x: Float64Array;
-  interval: number;
-  t: number;
+  size: number;
+  cubic: MonotoneCubic;
 }
 
 function cubicStencil(axis: ArrayLike<number>, found: { i: number; t: number }): CubicStencil {
@@ -94,7 +93,7 @@ function cubicStencil(axis: ArrayLike<number>, found: { i: number; t: number }):
   const last = found.t === 0 ? found.i : Math.min(axis.length - 1, found.i + 2);
   const x = new Float64Array(last - first + 1);
   for (let k = first; k <= last; k++) x[k - first] = axis[k];
-  return { first, x, interval: found.i - first, t: found.t };
+  return { first, size: x.length, cubic: new MonotoneCubic(x, x.length, found.i - first, found.t) };
 }
 
 /**
@@ -119,7 +118,8 @@ export class TableLine {
   private gmNodes: Float64Array | null = null;
   private readonly lengthValues = new Float64Array(4);
   private readonly vsbValues = new Float64Array(4);
-  private readonly vgsX = new Float64Array(4);
+  /** Four VGS nodes relative to the first (only differences matter to the cubic). */
+  private readonly vgsX: Float64Array;
   private readonly vgsY = new Float64Array(4);
 
   constructor(prepared: PreparedTable, conditions: TableConditions) {
@@ -152,13 +152,13 @@ export class TableLine {
     const vdsTerms = linearWeights(vds);
     this.temperatureWeights = Float64Array.from(temperatures, (t) => t.weight);
     this.vdsWeights = Float64Array.from(vdsTerms, (d) => d.weight);
-    this.offsets = new Int32Array(temperatures.length * this.lengths.x.length * this.vsb.x.length * vdsTerms.length);
+    this.offsets = new Int32Array(temperatures.length * this.lengths.size * this.vsb.size * vdsTerms.length);
     let low = grid.vgs.count;
     let high = 0;
     let at = 0;
     for (const t of temperatures) {
-      for (let k = 0; k < this.lengths.x.length; k++) {
-        for (let s = 0; s < this.vsb.x.length; s++) {
+      for (let k = 0; k < this.lengths.size; k++) {
+        for (let s = 0; s < this.vsb.size; s++) {
           for (const d of vdsTerms) {
             const offset = lineOffset(grid, corner, t.index, this.lengths.first + k, this.vsb.first + s, d.index);
             const peak = prepared.gmIdPeaks[offset / grid.vgs.count];
@@ -170,6 +170,8 @@ export class TableLine {
       }
     }
     this.gmIdPeakRange = [low, high];
+    const { step } = grid.vgs;
+    this.vgsX = Float64Array.of(0, step, 2 * step, 3 * step);
   }
 
   get count(): number {
@@ -193,8 +195,8 @@ export class TableLine {
   /** Node g of a column through the stencils: linear in VDS, monotone cubic in VSB then in ln L, linear in temperature. */
   private combine(column: Float32Array | Float64Array, g: number): number {
     const { offsets, vdsWeights, lengthValues, vsbValues, lengths, vsb } = this;
-    const nK = lengths.x.length;
-    const nS = vsb.x.length;
+    const nK = lengths.size;
+    const nS = vsb.size;
     const nD = vdsWeights.length;
     let at = 0;
     let total = 0;
@@ -205,9 +207,9 @@ export class TableLine {
           for (let d = 0; d < nD; d++) value += vdsWeights[d] * column[offsets[at++] + g];
           vsbValues[s] = value;
         }
-        lengthValues[k] = nS === 1 ? vsbValues[0] : monotoneCubicAt(vsb.x, vsbValues, nS, vsb.interval, vsb.t);
+        lengthValues[k] = vsb.cubic.at(vsbValues);
       }
-      total += this.temperatureWeights[t] * (nK === 1 ? lengthValues[0] : monotoneCubicAt(lengths.x, lengthValues, nK, lengths.interval, lengths.t));
+      total += this.temperatureWeights[t] * lengths.cubic.at(lengthValues);
     }
     return total;
   }
@@ -223,10 +225,7 @@ export class TableLine {
     if (Math.abs(t - 1) <= ON_GRID / step) return this.node(field, g + 1);
     const first = Math.max(0, g - 1);
     const last = Math.min(count - 1, g + 2);
-    for (let k = first; k <= last; k++) {
-      this.vgsX[k - first] = vgsOfNode(this.grid.vgs, k);
-      this.vgsY[k - first] = this.node(field, k);
-    }
+    for (let k = first; k <= last; k++) this.vgsY[k - first] = this.node(field, k);
     return monotoneCubicAt(this.vgsX, this.vgsY, last - first + 1, g - first, t);
   }
 
