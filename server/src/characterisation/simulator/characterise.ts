@@ -85,21 +85,34 @@ export async function characterise(input: CharacterisationInput, options: Charac
   const chunks = planChunks(grid, options.instancesPerRun);
 
   const stop = new AbortController();
-  // Every queued run listens to this signal (piscina adds one listener per task).
-  setMaxListeners(chunks.length + 10, stop.signal);
+  // Every run in flight listens to this signal (piscina adds one listener per task).
+  setMaxListeners(options.pool.threads + 10, stop.signal);
   const abort = () => stop.abort(options.signal?.reason);
   if (options.signal?.aborted) throw new CharacterisationError('CHARACTERISATION_CANCELLED', 'The characterisation was cancelled');
   options.signal?.addEventListener('abort', abort, { once: true });
   let done = 0;
-  try {
-    await Promise.all(chunks.map((chunk) => runChunk(input, models[chunk.corner], families[chunk.corner], chunk, { columns, buffers, type }, options, stop.signal).then((stored) => {
+  // A few runs in flight (one per worker and one waiting), so that netlists are written as runs start
+  // rather than all at once, which would hold the event loop for the whole grid's worth of text.
+  let next = 0;
+  const lane = async () => {
+    while (next < chunks.length && !stop.signal.aborted) {
+      const chunk = chunks[next++];
+      const stored = await runChunk(input, models[chunk.corner], families[chunk.corner], chunk, { columns, buffers, type }, options, stop.signal);
       if (stop.signal.aborted) return;
       done += stored;
       options.onProgress?.({ done, total: points });
-    }).catch((error: unknown) => {
-      stop.abort(error);
-      throw error;
-    })));
+    }
+  };
+  try {
+    await Promise.all(
+      Array.from({ length: Math.min(chunks.length, options.pool.threads + 1) }, () =>
+        lane().catch((error: unknown) => {
+          stop.abort(error);
+          throw error;
+        }),
+      ),
+    );
+    if (stop.signal.aborted) throw new CharacterisationError('CHARACTERISATION_CANCELLED', 'The characterisation was cancelled');
   } catch (error) {
     if (options.signal?.aborted) throw new CharacterisationError('CHARACTERISATION_CANCELLED', 'The characterisation was cancelled');
     throw error;
