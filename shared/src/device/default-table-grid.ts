@@ -21,7 +21,7 @@ const LENGTH_FACTORS = [1, 1.15, 1.33, 1.6, 2, 3, 5, 8, 12, 20];
 
 /**
  * The default characterisation grid (docs/characterisation.md): ten lengths from lmin to 20·lmin, closer than
- * ×1.2 next to lmin where the threshold rolls off steeply and about ×1.6 beyond (measured: ≤ 0.6 % ID error
+ * ×1.2 next to lmin where the threshold rolls off steeply and about ×1.6 beyond (measured: ≤ 0.7 % ID error
  * between lengths, against 1.8 % for nine evenly log-spaced ones); VGS from 0 to vdd in 10 mV steps; eight VDS
  * from 50 mV to vdd, closer at low VDS where the current bends; VSB from 0 to vdd/2 in four steps.
  */
