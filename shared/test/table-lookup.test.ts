@@ -65,6 +65,7 @@ describe('table lookups', () => {
           const l = Math.exp(lnL);
           const op = tableOperatingPoint(exact, { corner: GRID.corners[corner], temperature, l, vds, vsb, w: 10e-6, vgs });
           const expected = logLinearDevice(corner, temperature, l, vgs, vds, vsb);
+          // Exact up to rounding (and to the snapping of a value within 1e-12 of a grid value onto it).
           for (const field of ['id', 'gm', 'gds', 'gmb', 'cgg'] as const) expect(relative(op[field], expected[field]), field).toBeLessThan(1e-9);
           for (const field of ['vt', 'vdsat', 'cgs', 'cgd', 'cgb'] as const) expect(Math.abs(op[field] - expected[field]), field).toBeLessThan(1e-9 * Math.abs(expected[field]) + 1e-24);
         },

@@ -15,8 +15,8 @@ import { say } from './say.js';
  */
 const LOG_FIELDS: ReadonlySet<TableField> = new Set(['id', 'gm', 'gds', 'gmb', 'cgg']);
 const LOG_FLOOR = 1e-30;
-/** How close to a grid value counts as on it: relative for L, absolute (V, °C) for the others. */
-const ON_GRID = 1e-9;
+/** How close to a grid value counts as on it (only rounding): relative for L, absolute (V, °C) for the others. */
+const ON_GRID = 1e-12;
 
 /** A table ready for lookups: the logarithms taken once, and per stored line the VGS node of its highest gm/ID. */
 export interface PreparedTable {
