@@ -13,4 +13,5 @@ export const WARNING_TITLES: Record<WarningCode, string> = {
   VDS_ABOVE_VDD: 'VDS is above the supply',
   TEMPERATURE_OUTSIDE_PROCESS_RANGE: 'The temperature is outside the process range',
   POINTS_WITHOUT_ANSWER: 'Some points have no answer',
+  TEMPERATURE_INTERPOLATED: 'Temperature between characterised ones',
 };
