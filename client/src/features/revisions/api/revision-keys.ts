@@ -11,8 +11,6 @@ export const revisionKeys = {
   verify: (id: string) => [...revisionKeys.all, 'verify', id] as const,
   diff: (id: string, against: string | undefined) => [...revisionKeys.all, 'diff', id, against ?? 'last-signed-off'] as const,
   comments: (id: string) => [...revisionKeys.all, 'comments', id] as const,
-  requests: (id: string) => [...revisionKeys.all, 'requests', id] as const,
-  reviewers: (projectId: string) => [...revisionKeys.all, 'reviewer-candidates', projectId] as const,
   /** `GET /api/sheets/:id/review-state`. */
   sheetState: (sheetId: string) => [...sheetKeys.detail(sheetId), 'review-state'] as const,
 };
