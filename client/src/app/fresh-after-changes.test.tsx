@@ -1,7 +1,7 @@
-import type { Device, Project, ProjectMember, ReviewRequest, Sheet, SheetReviewState, SheetSummary } from '@channelwright/shared/schemas';
+import type { Device, Project, ProjectMember, ReviewRequest, Sheet, SheetSummary } from '@channelwright/shared/schemas';
 import { screen, waitFor, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { HASH_OF_R1, project as revisionProject, reviewRequest, revision } from '../features/revisions/testing/revision-fixtures';
+import { draftReviewState, HASH_OF_R1, project as revisionProject, reviewRequest, revision } from '../features/revisions/testing/revision-fixtures';
 import { installFakeApi } from '../test/fake-api';
 import { workbenchHandlers } from '../test/fake-compute-api';
 import { storedDevice, storedSheet, wrenmoss } from '../test/fake-sheets';
@@ -14,16 +14,6 @@ import { renderApp } from '../test/render-app';
 
 const µ = 1e-6;
 const summaryOf = ({ devices: _devices, totals: _totals, ...summary }: Sheet): SheetSummary => summary;
-const draftReviewState = (sheetId: string): SheetReviewState => ({
-  sheetId,
-  projectId: wrenmoss.id,
-  state: 'draft',
-  latestRevision: null,
-  lastSignedOff: null,
-  changedSinceLatest: true,
-  revisions: [],
-  openRequests: [],
-});
 
 /** The Wrenmoss project in memory: one sheet with one device (stale when asked), two members. */
 function fakeWorkspace({ staleDevice = false } = {}) {
@@ -59,8 +49,8 @@ function fakeWorkspace({ staleDevice = false } = {}) {
     },
     'GET /api/sheets/s-amp': () => ({ body: amplifier() }),
     'GET /api/sheets/s-new': () => ({ body: extraSheets[0] }),
-    'GET /api/sheets/s-amp/review-state': { body: draftReviewState('s-amp') },
-    'GET /api/sheets/s-new/review-state': { body: draftReviewState('s-new') },
+    'GET /api/sheets/s-amp/review-state': { body: draftReviewState({ sheetId: 's-amp', projectId: wrenmoss.id }) },
+    'GET /api/sheets/s-new/review-state': { body: draftReviewState({ sheetId: 's-new', projectId: wrenmoss.id }) },
     'POST /api/sheets/s-amp/devices': ({ body }) => {
       const device = storedDevice(`d-${devices.length + 1}`, devices.length, body as never);
       devices = [...devices, device];
