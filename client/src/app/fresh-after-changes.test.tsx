@@ -15,13 +15,16 @@ import { renderApp } from '../test/render-app';
 const µ = 1e-6;
 const summaryOf = ({ devices: _devices, totals: _totals, ...summary }: Sheet): SheetSummary => summary;
 
-/** The Wrenmoss project in memory: one sheet with one device (stale when asked), two members. */
-function fakeWorkspace({ staleDevice = false } = {}) {
+const viewer: ProjectMember = { userId: 'u-viewer', email: 'quill@brackenfold.example', displayName: 'Quill Ashdown', role: 'viewer', addedAt: '2025-03-05T09:00:00.000Z' };
+
+/** The Wrenmoss project in memory: one sheet with one device (stale when asked), two members (three with a viewer). */
+function fakeWorkspace({ staleDevice = false, withViewer = false } = {}) {
   let devices: Device[] = [storedDevice('d-m1', 0, { name: 'M1', function: 'input pair (+)', polarity: 'pmos', id: 10 * µ, l: 0.5 * µ, vds: 0.6, gmId: 16 }, staleDevice)];
   const extraSheets: Sheet[] = [];
   const members: ProjectMember[] = [
     { userId: designer.id, email: designer.email, displayName: designer.displayName, role: 'owner', addedAt: '2025-03-04T09:00:00.000Z' },
     { userId: reviewer.id, email: reviewer.email, displayName: reviewer.displayName, role: 'reviewer', addedAt: '2025-03-04T09:00:00.000Z' },
+    ...(withViewer ? [{ ...viewer }] : []),
   ];
   const amplifier = () => storedSheet(devices);
   const sheets = () => [amplifier(), ...extraSheets];
@@ -41,6 +44,11 @@ function fakeWorkspace({ staleDevice = false } = {}) {
       const member: ProjectMember = { userId: 'u-new', email: (body as { email: string }).email, displayName: 'Orla Penhallow', role: 'designer', addedAt: '2025-03-06T09:00:00.000Z' };
       members.push(member);
       return { status: 201, body: member };
+    },
+    [`PATCH /api/projects/${wrenmoss.id}/members/${viewer.userId}`]: ({ body }) => {
+      const member = members.find((m) => m.userId === viewer.userId) as ProjectMember;
+      member.role = (body as { role: ProjectMember['role'] }).role;
+      return { body: member };
     },
     [`POST /api/projects/${wrenmoss.id}/sheets`]: ({ body }) => {
       const sheet = { ...storedSheet([]), id: 's-new', name: (body as { name: string }).name };
@@ -149,6 +157,31 @@ describe('pages that read something before it changed', { timeout: 30_000 }, () 
     await user.click(navbarLink('Home'));
 
     await waitFor(async () => expect(cellOf(await projectsTable(), wrenmoss.name, 'Members')).toHaveTextContent('3'));
+  });
+
+  it('offer a member just given the reviewer role in the review dialog at once', async () => {
+    const api = fakeWorkspace({ withViewer: true });
+    const { user } = renderApp('/sheets/s-amp', { token: 'token-ines' });
+    const openReviewerChoices = async () => {
+      await user.click(await screen.findByRole('button', { name: 'Freeze revision' }, { timeout: 10_000 }));
+      const dialog = await screen.findByRole('dialog');
+      await user.click(within(dialog).getByRole('combobox', { name: /Reviewer/ }));
+      await screen.findAllByRole('option');
+      return dialog;
+    };
+    const choices = () => screen.getAllByRole('option').map((option) => option.textContent);
+    const dialog = await openReviewerChoices();
+    expect(choices()).toEqual([`${reviewer.displayName} (reviewer)`]);
+    await user.click(within(dialog).getByRole('button', { name: 'Cancel' }));
+
+    await user.click(breadcrumb(wrenmoss.name));
+    await user.click(await screen.findByRole('combobox', { name: `Role of ${viewer.displayName}` }, { timeout: 10_000 }));
+    await user.click(await screen.findByRole('option', { name: 'Reviewer' }));
+    await waitFor(() => expect(api.to(`PATCH /api/projects/${wrenmoss.id}/members/${viewer.userId}`)).toHaveLength(1));
+    await user.click(within(await sheetsTable()).getByRole('link', { name: SHEET }));
+
+    await openReviewerChoices();
+    await waitFor(() => expect(choices()).toContain(`${viewer.displayName} (reviewer)`));
   });
 
   it('take a request the reviewer decided on the revision page out of their inbox at once', async () => {
