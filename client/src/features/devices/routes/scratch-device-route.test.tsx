@@ -43,6 +43,14 @@ function resultCell(group: string, symbol: string): HTMLElement {
   return within(row).getAllByRole('cell').at(-1) as HTMLElement;
 }
 
+/** The number a result cell shows, read back in SI ("1.608 µm" → 1.608e-6). */
+function shownQuantity(group: string, symbol: string, unit: string): number {
+  const text = resultCell(group, symbol).textContent ?? '';
+  const parsed = parseQuantity(text, unit);
+  if (!parsed.ok) throw new Error(`"${text}" is not a quantity in ${unit}: ${parsed.reason}`);
+  return parsed.value;
+}
+
 describe('the device form', { timeout: 20_000 }, () => {
   it('reads SI prefixes and shows each parsed value with its unit', async () => {
     fakeServer();
@@ -66,13 +74,16 @@ describe('the device form', { timeout: 20_000 }, () => {
 
     await waitFor(() => expect(lastSizeRequest(api)).toMatchObject({ id: 20e-6, l: 0.5e-6, vov: 0.2, vds: 0.9, vsb: 0, model: 'square-law', processId: 'p-bf180g', processVersion: 2 }));
     // Shichman and Hodges (1968), saturation: W = 2·ID·L / (kp·VOV²·(1 + λ·VDS)), with BF180-G's
-    // invented kp = 290 µA/V² and λ = 0.08 /V at L = lRef = 0.5 µm: 2·20e-6·0.5e-6 / (290e-6·0.04·1.072)
-    // = 1.608 µm, which the 5 nm grid rounds to 1.61 µm.
-    const kp = BF180G.nmos.kp;
-    const lambda = BF180G.nmos.lambda;
-    const byHand = (2 * 20e-6 * 0.5e-6) / (kp * 0.2 ** 2 * (1 + lambda * 0.9));
-    expect(byHand).toBeCloseTo(1.608e-6, 9);
+    // invented kp = 290 µA/V² and λ = 0.08 /V at L = lRef = 0.5 µm (λ scales as lRef/L):
+    // 2·20e-6·0.5e-6 / (290e-6·0.04·1.072) = 1.608 µm, which the 5 nm grid rounds to 1.61 µm.
+    const { kp, lambda, wgrid } = BF180G.nmos;
+    const lRef = BF180G.nmos.lRef as number;
+    const byHand = (2 * 20e-6 * 0.5e-6) / (kp * 0.2 ** 2 * (1 + ((lambda * lRef) / 0.5e-6) * 0.9));
     await waitFor(() => expect(resultCell('Geometry', 'W')).toHaveTextContent('1.61 µm'));
+    // The width the engine found before the grid is the hand value to the four digits shown, and the
+    // drawn width is the multiple of the grid nearest to it.
+    expect(shownQuantity('Geometry', 'W (exact)', 'm') / byHand).toBeCloseTo(1, 3);
+    expect(Math.abs(shownQuantity('Geometry', 'W', 'm') - byHand)).toBeLessThanOrEqual(wgrid / 2);
     expect(resultCell('Geometry', 'L')).toHaveTextContent('500 nm');
     // The snapped W is a little wider than needed, so the VOV reached is a hair under the target.
     const reached = parseQuantity(resultCell('Bias', 'VOV').textContent ?? '', 'V');
