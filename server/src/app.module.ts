@@ -1,6 +1,7 @@
 import { Module, type DynamicModule } from '@nestjs/common';
 import { AuditModule } from './audit/audit.module.js';
 import { AuthModule } from './auth/auth.module.js';
+import { CharacterisationModule } from './characterisation/characterisation.module.js';
 import { ComputeModule } from './compute/compute.module.js';
 import { serveClient } from './common/static/serve-client.js';
 import type { AppConfig } from './config/app-config.js';
@@ -30,6 +31,7 @@ export class AppModule {
         AuthModule,
         HealthModule,
         ComputeModule,
+        CharacterisationModule,
         SeedModule,
         ProcessesModule,
         MailModule,
