@@ -1,5 +1,5 @@
 // `npm run bench`: the benchmark scripts, which print figures (speed is never asserted in tests).
-import { buildAll, ensureInstalled, log, runNpm } from './lib.mjs';
+import { buildAll, ensureInstalled, log, run, runNpm } from './lib.mjs';
 
 await ensureInstalled();
 await buildAll();
@@ -8,4 +8,7 @@ for (const workspace of ['shared', 'server']) {
   log(`benchmarks of ${workspace}…`);
   if ((await runNpm(['run', 'bench', '-w', workspace, '--if-present'])) !== 0) failures += 1;
 }
+// Characterisation on ngspice (native and WebAssembly) and the table model: a few minutes on two cores.
+log('benchmarks of characterisation and the table model…');
+if ((await run(process.execPath, ['server/bench/characterisation-bench.mjs'])) !== 0) failures += 1;
 process.exit(failures === 0 ? 0 : 1);

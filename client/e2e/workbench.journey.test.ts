@@ -125,7 +125,6 @@ describeJourney('sizing devices on a sheet', (journey) => {
     const { kp, lambda, wgrid } = BF180G.nmos;
     const lRef = BF180G.nmos.lRef as number;
     const byHand = (2 * 10e-6 * 1e-6) / (kp * 0.15 ** 2 * (1 + ((lambda * lRef) / 1e-6) * 0.6));
-    expect(byHand).toBeCloseTo(2.9933e-6, 9);
     const shown = await quantityIn(resultCell(page, 'Geometry', 'W'), 'm');
     expect(Math.abs(shown - byHand)).toBeLessThanOrEqual(wgrid);
     await shoot(page, 'workbench-4-square-law-check');

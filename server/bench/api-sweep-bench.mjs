@@ -4,10 +4,10 @@
 // points in one batch run (start-up included) on the same machine.
 import { execFileSync, spawn } from 'node:child_process';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
-import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { freePort, waitForHealth } from './bench-server.mjs';
 import { performance } from 'node:perf_hooks';
 import { BF180G } from '@channelwright/shared/device';
 
@@ -18,29 +18,9 @@ const temperatures = [-40, 27, 125];
 const sweep = { param: 'vgs', from: 0, to: 1.8, points: 2000, scale: 'lin' };
 const device = { polarity: 'nmos', model: 'all-region', id: 20e-6, w: 10e-6, l: 0.5e-6, vds: 0.9, vsb: 0, hold: 'w' };
 
-function freePort() {
-  return new Promise((resolve) => {
-    const server = createServer();
-    server.listen(0, '127.0.0.1', () => {
-      const { port } = server.address();
-      server.close(() => resolve(port));
-    });
-  });
-}
 
 const median = (values) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)];
 
-async function waitForHealth(base) {
-  for (let i = 0; i < 900; i++) {
-    try {
-      if ((await fetch(`${base}/api/health`)).ok) return;
-    } catch {
-      // not listening yet
-    }
-    await new Promise((r) => setTimeout(r, 100));
-  }
-  throw new Error('the server did not become healthy');
-}
 
 async function benchApi() {
   const dataDir = mkdtempSync(join(tmpdir(), 'channelwright-bench-'));

@@ -36,6 +36,8 @@ export async function createApp(options: CreateAppOptions = {}): Promise<NestExp
     new Logger('ServeClient').warn(`No client build in ${config.clientDist}: serving the API only`);
   }
   app.setGlobalPrefix(API_PREFIX);
+  // Behind a reverse proxy, the client address (which sign-in limits count) is the proxy's X-Forwarded-For.
+  app.set('trust proxy', config.trustProxyHops);
   // API answers are computed per request, so an ETag only costs a hash of every body (a large sweep is MBs).
   app.set('etag', false);
   app.use(helmet(HELMET_OPTIONS));

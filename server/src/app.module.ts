@@ -1,7 +1,7 @@
 import { Module, type DynamicModule } from '@nestjs/common';
 import { AuditModule } from './audit/audit.module.js';
-import { ProjectAuditModule } from './audit/project-audit.module.js';
 import { AuthModule } from './auth/auth.module.js';
+import { CharacterisationModule } from './characterisation/characterisation.module.js';
 import { ComputeModule } from './compute/compute.module.js';
 import { serveClient } from './common/static/serve-client.js';
 import type { AppConfig } from './config/app-config.js';
@@ -10,6 +10,7 @@ import { DatabaseModule } from './database/database.module.js';
 import { HealthModule } from './health/health.module.js';
 import { MailModule } from './mail/mail.module.js';
 import { ProcessesModule } from './processes/processes.module.js';
+import { ProjectAuditModule } from './project-audit/project-audit.module.js';
 import { ProjectsModule } from './projects/projects.module.js';
 import { ReviewsModule } from './reviews/reviews.module.js';
 import { RevisionsModule } from './revisions/revisions.module.js';
@@ -30,6 +31,7 @@ export class AppModule {
         AuthModule,
         HealthModule,
         ComputeModule,
+        CharacterisationModule,
         SeedModule,
         ProcessesModule,
         MailModule,

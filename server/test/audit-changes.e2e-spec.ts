@@ -38,9 +38,17 @@ describe('membership, sheet and device changes leave audit rows (and a new membe
   it('writes neither mail nor audit row when adding a member fails', async () => {
     const mails = (await outboxRows(t)).length;
     await t.http().post(`/api/projects/${projectId}/members`).set(bearer(tokens.designer)).send({ email: NEWCOMER, role: 'viewer' }).expect(409);
-    await t.http().post(`/api/projects/${projectId}/members`).set(bearer(tokens.designer)).send({ email: 'ghost@brackenfold.example', role: 'viewer' }).expect(404);
     expect((await outboxRows(t)).length).toBe(mails);
     expect(await audit({ action: 'member.added' })).toHaveLength(1);
+  });
+
+  it('adds nobody and records nothing for an address without an account, but mails that address how to get one', async () => {
+    const mails = (await outboxRows(t)).length;
+    await t.http().post(`/api/projects/${projectId}/members`).set(bearer(tokens.designer)).send({ email: 'ghost@brackenfold.example', role: 'viewer' }).expect(201);
+    expect((await outboxRows(t)).slice(mails).map((row) => row.recipient)).toEqual(['ghost@brackenfold.example']);
+    expect(await audit({ action: 'member.added' })).toHaveLength(1);
+    const [invitation] = await receivedMail(t, 'ghost@brackenfold.example');
+    expect(invitation.text).toContain('has no active account on this Channelwright server');
   });
 
   it('records a role change with the role before and after, and a removal', async () => {

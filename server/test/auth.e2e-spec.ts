@@ -1,7 +1,8 @@
-import { apiErrorBodySchema, authResponseSchema, userSchema } from '@channelwright/shared/schemas';
+import { apiErrorBodySchema, authResponseSchema, registerResponseSchema, userSchema } from '@channelwright/shared/schemas';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../src/seed/demo-accounts.js';
 import { UserEntity } from '../src/users/user.entity.js';
-import { bearer, createTestApp, type TestApp } from './helpers/test-app.js';
+import { receivedMail } from './helpers/mail.js';
+import { bearer, confirmationToken, createTestApp, type TestApp } from './helpers/test-app.js';
 
 describe('sign-in over HTTP', () => {
   let t: TestApp;
@@ -10,25 +11,41 @@ describe('sign-in over HTTP', () => {
   });
   afterAll(() => t.close());
 
-  it('registers an account as a member and signs it in at once', async () => {
+  it('registers an account as a member, which signs in once its owner follows the mailed link with the password', async () => {
     const response = await t
       .http()
       .post('/api/auth/register')
       .send({ email: '  Nia.Okafor@Marsh.example ', displayName: 'Nia Okafor', password: 'heron-lake-42' })
-      .expect(201);
-    const body = authResponseSchema.parse(response.body);
-    expect(body.user).toMatchObject({ email: 'nia.okafor@marsh.example', displayName: 'Nia Okafor', role: 'member', disabled: false });
+      .expect(202);
+    expect(registerResponseSchema.parse(response.body)).toEqual({ status: 'confirmation-sent', email: 'nia.okafor@marsh.example' });
+    await t.http().post('/api/auth/login').send({ email: 'nia.okafor@marsh.example', password: 'heron-lake-42' }).expect(401);
+    const token = await confirmationToken(t.app, 'nia.okafor@marsh.example');
+    await t.http().post('/api/auth/confirm').send({ token, password: 'not-her-password' }).expect(401);
+    const confirmed = await t.http().post('/api/auth/confirm').send({ token, password: 'heron-lake-42' }).expect(200);
+    const body = authResponseSchema.parse(confirmed.body);
+    expect(body.user).toMatchObject({ email: 'nia.okafor@marsh.example', displayName: 'Nia Okafor', role: 'member', disabled: false, libraryAccess: false });
     const me = await t.http().get('/api/auth/me').set(bearer(body.accessToken)).expect(200);
     expect(me.body.id).toBe(body.user.id);
+    await t.http().post('/api/auth/login').send({ email: 'nia.okafor@marsh.example', password: 'heron-lake-42' }).expect(200);
   });
 
-  it('refuses a second account with the same e-mail in another case, naming the field', async () => {
-    const response = await t
-      .http()
-      .post('/api/auth/register')
-      .send({ email: 'NIA.OKAFOR@marsh.example', displayName: 'Someone Else', password: 'another-pass-1' })
-      .expect(409);
-    expect(response.body).toEqual({ statusCode: 409, code: 'EMAIL_TAKEN', message: expect.any(String), field: 'email' });
+  it('answers a sign-up with a taken e-mail (in another case) exactly like a new one, changes nothing and mails the owner instead', async () => {
+    const taken = await t.http().post('/api/auth/register').send({ email: 'NIA.OKAFOR@marsh.example', displayName: 'Someone Else', password: 'another-pass-1' }).expect(202);
+    const fresh = await t.http().post('/api/auth/register').send({ email: 'fresh.face@marsh.example', displayName: 'Fresh Face', password: 'another-pass-1' }).expect(202);
+    expect(Object.keys(taken.body).sort()).toEqual(Object.keys(fresh.body).sort());
+    expect(taken.body).toEqual({ status: 'confirmation-sent', email: 'nia.okafor@marsh.example' });
+    const [notice] = await receivedMail(t, 'nia.okafor@marsh.example');
+    expect(notice.subject).toBe('Someone tried to sign up with your address');
+    expect(notice.text).not.toMatch(/confirm=/);
+    const stored = await t.dataSource.getRepository(UserEntity).findOneByOrFail({ email: 'nia.okafor@marsh.example' });
+    expect(stored.displayName).toBe('Nia Okafor');
+    await t.http().post('/api/auth/login').send({ email: 'nia.okafor@marsh.example', password: 'heron-lake-42' }).expect(200);
+  });
+
+  it('refuses a confirmation link that is not one, naming the field', async () => {
+    const accessToken = await t.loginAs(DEMO_ACCOUNTS.viewer.email);
+    const response = await t.http().post('/api/auth/confirm').send({ token: accessToken, password: DEMO_PASSWORD }).expect(400);
+    expect(response.body).toMatchObject({ code: 'VALIDATION_FAILED', field: 'token' });
   });
 
   it('refuses a short password at registration, naming the field', async () => {
@@ -116,16 +133,42 @@ describe('sign-in over HTTP', () => {
     await t.http().get('/api/auth/me').set(bearer(accessToken)).expect(200);
   });
 
-  it('throttles sign-in per e-mail: ten attempts in a minute are answered, the eleventh gets 429', async () => {
-    const email = 'Throttled@Brackenfold.example';
-    for (let attempt = 1; attempt <= 10; attempt += 1) {
-      const casing = attempt % 2 === 0 ? email.toLowerCase() : email;
-      await t.http().post('/api/auth/login').send({ email: casing, password: 'wrong-password' }).expect(401);
-    }
-    const eleventh = await t.http().post('/api/auth/login').send({ email, password: 'wrong-password' }).expect(429);
-    expect(eleventh.body).toEqual({ statusCode: 429, code: 'TOO_MANY_REQUESTS', message: expect.any(String) });
+});
 
-    // Another e-mail is counted on its own.
-    await t.http().post('/api/auth/login').send({ email: DEMO_ACCOUNTS.viewer.email, password: DEMO_PASSWORD }).expect(200);
+describe('sign-in limits, behind a proxy that names the client address', () => {
+  let t: TestApp;
+  beforeAll(async () => {
+    t = await createTestApp({ env: { TRUST_PROXY: '1' } });
+  });
+  afterAll(() => t.close());
+  const from = (address: string) => ({ 'X-Forwarded-For': address });
+
+  it('blocks an address after ten failed sign-ins, yet lets the owner in from elsewhere with the right password', async () => {
+    const owner = DEMO_ACCOUNTS.reviewer.email;
+    for (let attempt = 1; attempt <= 10; attempt += 1) {
+      const casing = attempt % 2 === 0 ? owner.toUpperCase() : owner;
+      await t.http().post('/api/auth/login').set(from('203.0.113.7')).send({ email: casing, password: 'wrong-password' }).expect(401);
+    }
+    const eleventh = await t.http().post('/api/auth/login').set(from('203.0.113.7')).send({ email: owner, password: DEMO_PASSWORD }).expect(429);
+    expect(eleventh.body).toEqual({ statusCode: 429, code: 'TOO_MANY_REQUESTS', message: expect.any(String) });
+    expect(Number(eleventh.headers['retry-after'])).toBeGreaterThan(0);
+
+    // The account was only slowed down: its owner, elsewhere, signs in.
+    await t.http().post('/api/auth/login').set(from('198.51.100.2')).send({ email: owner, password: DEMO_PASSWORD }).expect(200);
+  });
+
+  it('counts failures, not sign-ins: an address signing in correctly is never blocked', async () => {
+    for (let attempt = 1; attempt <= 12; attempt += 1) {
+      await t.http().post('/api/auth/login').set(from('198.51.100.9')).send({ email: DEMO_ACCOUNTS.viewer.email, password: DEMO_PASSWORD }).expect(200);
+    }
+  });
+
+  it('limits sign-ups per address: ten an hour are answered, the eleventh gets 429', async () => {
+    for (let attempt = 1; attempt <= 10; attempt += 1) {
+      await t.http().post('/api/auth/register').set(from('192.0.2.55')).send({ email: `visitor${attempt}@marsh.example`, displayName: 'Visitor', password: 'visitor-pass-1' }).expect(202);
+    }
+    const eleventh = await t.http().post('/api/auth/register').set(from('192.0.2.55')).send({ email: 'visitor11@marsh.example', displayName: 'Visitor', password: 'visitor-pass-1' }).expect(429);
+    expect(eleventh.body.code).toBe('TOO_MANY_REQUESTS');
+    await t.http().post('/api/auth/register').set(from('192.0.2.56')).send({ email: 'visitor12@marsh.example', displayName: 'Visitor', password: 'visitor-pass-1' }).expect(202);
   });
 });

@@ -1,6 +1,5 @@
 import { createApp } from '../src/app.factory.js';
 import { ConfigError } from '../src/config/config-error.js';
-import { DEV_JWT_SECRET } from '../src/config/dev-defaults.js';
 import { createTestEnv, type TestEnv } from './helpers/test-env.js';
 
 describe('start-up configuration', () => {
@@ -13,8 +12,8 @@ describe('start-up configuration', () => {
   const startWith = (overrides: Record<string, string | undefined>) =>
     createApp({ env: { ...testEnv.env, ...overrides }, logger: false });
 
-  it('refuses to start in production with the development JWT secret, naming JWT_SECRET', async () => {
-    const start = startWith({ NODE_ENV: 'production', JWT_SECRET: DEV_JWT_SECRET, SEED_DEMO: 'false' });
+  it('refuses to start in production with a JWT secret shorter than 32 characters, naming JWT_SECRET', async () => {
+    const start = startWith({ NODE_ENV: 'production', JWT_SECRET: 'only-twenty-characters', SEED_DEMO: 'false' });
     await expect(start).rejects.toThrow(ConfigError);
     await expect(start).rejects.toMatchObject({ variable: 'JWT_SECRET' });
   });

@@ -124,11 +124,15 @@ describe('projects and membership', () => {
       expect((await t.http().get(`/api/projects/${blockId}`).set(bearer(token)).expect(200)).body.myRole).toBe('designer');
     });
 
-    it('answers 409 MEMBER_EXISTS for a member added twice and 404 USER_NOT_FOUND for an unknown e-mail, naming the field', async () => {
+    it('answers 409 MEMBER_EXISTS for a member added twice, naming the field, and an unknown e-mail exactly like a known one, adding nobody', async () => {
       const twice = await t.http().post(`/api/projects/${blockId}/members`).set(bearer(tokens.designer)).send({ email: colleague.email, role: 'viewer' }).expect(409);
       expect(twice.body).toMatchObject({ code: 'MEMBER_EXISTS', field: 'email' });
-      const unknown = await t.http().post(`/api/projects/${blockId}/members`).set(bearer(tokens.designer)).send({ email: 'nobody@brackenfold.example', role: 'viewer' }).expect(404);
-      expect(unknown.body).toMatchObject({ code: 'USER_NOT_FOUND', field: 'email' });
+      const unknown = await t.http().post(`/api/projects/${blockId}/members`).set(bearer(tokens.designer)).send({ email: 'nobody@brackenfold.example', role: 'viewer' }).expect(201);
+      const known = await t.http().post(`/api/projects/${blockId}/members`).set(bearer(tokens.designer)).send({ email: DEMO_ACCOUNTS.viewer.email, role: 'viewer' }).expect(201);
+      const shape = (body: Record<string, unknown>) => Object.fromEntries(Object.entries(body).map(([key, value]) => [key, key === 'email' || key === 'displayName' ? 'the address' : typeof value]));
+      expect(shape(unknown.body)).toEqual(shape(known.body));
+      expect(unknown.body).toMatchObject({ email: 'nobody@brackenfold.example', displayName: 'nobody@brackenfold.example', role: 'viewer' });
+      await t.http().delete(`/api/projects/${blockId}/members/${known.body.userId}`).set(bearer(tokens.designer)).expect(204);
       const badRole = await t.http().post(`/api/projects/${blockId}/members`).set(bearer(tokens.designer)).send({ email: colleague.email, role: 'boss' }).expect(400);
       expect(badRole.body).toMatchObject({ code: 'VALIDATION_FAILED', field: 'role' });
       expect((await members(blockId)).map((m) => m.role)).toEqual(['owner', 'designer']);

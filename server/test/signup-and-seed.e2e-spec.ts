@@ -4,10 +4,10 @@ import { createTestApp, type TestApp } from './helpers/test-app.js';
 
 const account = (name: string) => ({ email: `${name}@fenwick.example`, displayName: name, password: 'long-enough-pass' });
 
-describe('SEED_DEMO=false: an empty database', () => {
+describe('SEED_DEMO=false and SIGNUP_ENABLED=true: an empty database', () => {
   let t: TestApp;
   beforeAll(async () => {
-    t = await createTestApp({ seed: false });
+    t = await createTestApp({ seed: false, env: { SIGNUP_ENABLED: 'true' } });
   });
   afterAll(() => t.close());
 
@@ -20,6 +20,21 @@ describe('SEED_DEMO=false: an empty database', () => {
     expect(first.user.role).toBe('admin');
     expect(second.user.role).toBe('member');
     await t.http().post('/api/auth/login').send({ email: DEMO_ACCOUNTS.designer.email, password: 'wrenmoss-demo' }).expect(401);
+  });
+});
+
+describe('SEED_DEMO=false without SIGNUP_ENABLED: a team\'s server', () => {
+  let t: TestApp;
+  beforeAll(async () => {
+    t = await createTestApp({ seed: false });
+  });
+  afterAll(() => t.close());
+
+  it('lets the first account in, then keeps sign-up closed by default', async () => {
+    expect((await t.register(account('admin-first'))).user.role).toBe('admin');
+    const refused = await t.http().post('/api/auth/register').send(account('walk-in')).expect(403);
+    expect(refused.body.code).toBe('SIGNUP_DISABLED');
+    expect((await t.http().get('/api/config').expect(200)).body).toMatchObject({ demo: false, signupEnabled: false });
   });
 });
 

@@ -1,5 +1,4 @@
-import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
-import { UserEntity } from '../users/user.entity.js';
+import { Column, Entity, ForeignKey, Index, PrimaryGeneratedColumn } from 'typeorm';
 
 /**
  * One entry of the append-only audit trail: who did what to which thing, when, with the state before
@@ -18,11 +17,8 @@ export class AuditEventEntity {
 
   /** Null for the system itself (the demo seed, a start-up task). */
   @Column({ type: 'varchar', nullable: true })
+  @ForeignKey('users', { name: 'FK_audit_events_actor' })
   actorId: string | null;
-
-  @ManyToOne(() => UserEntity, { nullable: true })
-  @JoinColumn({ name: 'actorId', foreignKeyConstraintName: 'FK_audit_events_actor' })
-  actor: Relation<UserEntity> | null;
 
   /** The project the event belongs to; null for installation-wide things (process profiles). */
   @Column({ type: 'varchar', nullable: true })

@@ -1,7 +1,8 @@
 import { auditRangeEnd, auditRangeStart, type AuditEvent, type AuditQuery } from '@channelwright/shared/schemas';
 import { Injectable } from '@nestjs/common';
-import { InjectDataSource } from '@nestjs/typeorm';
-import { Brackets, type DataSource, type EntityManager } from 'typeorm';
+import { InjectRepository } from '@nestjs/typeorm';
+import { Brackets, type EntityManager, type Repository } from 'typeorm';
+import { UsersService, type UserCard } from '../users/users.service.js';
 import { AuditEventEntity } from './audit-event.entity.js';
 import type { AuditRecord } from './audit-record.js';
 import { recordAudit } from './record-audit.js';
@@ -13,42 +14,45 @@ import { recordAudit } from './record-audit.js';
  */
 @Injectable()
 export class AuditService {
-  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+  constructor(
+    @InjectRepository(AuditEventEntity) private readonly events: Repository<AuditEventEntity>,
+    private readonly users: UsersService,
+  ) {}
 
   record(manager: EntityManager, event: AuditRecord): Promise<void> {
     return recordAudit(manager, event);
   }
 
-  /** A project's events, newest first, filtered. */
-  async listForProject(projectId: string, query: Omit<AuditQuery, 'format'>): Promise<AuditEvent[]> {
-    const builder = this.dataSource
-      .getRepository(AuditEventEntity)
-      .createQueryBuilder('event')
-      .leftJoinAndSelect('event.actor', 'actor')
-      .where(
-        new Brackets((where) =>
-          where
-            .where('event.projectId = :projectId')
-            // Installation-wide process-version events count for every project with a sheet on that profile.
-            .orWhere(`event.entityType = 'process-profile' AND event.entityId IN (SELECT "version"."profileId" FROM "sheets" "sheet" INNER JOIN "process_versions" "version" ON "version"."id" = "sheet"."processVersionId" WHERE "sheet"."projectId" = :projectId)`),
-        ),
-      )
-      .setParameter('projectId', projectId);
+  /**
+   * A project's events, newest first, filtered; with them the installation-wide events of the process
+   * profiles `profileIds` (the profiles the project's sheets are on, which the caller knows).
+   */
+  async listForProject(projectId: string, profileIds: readonly string[], query: Omit<AuditQuery, 'format'>): Promise<AuditEvent[]> {
+    const builder = this.events.createQueryBuilder('event').where(
+      new Brackets((where) => {
+        where.where('event.projectId = :projectId', { projectId });
+        if (profileIds.length > 0) where.orWhere(`event.entityType = 'process-profile' AND event.entityId IN (:...profileIds)`, { profileIds });
+      }),
+    );
     if (query.action) builder.andWhere('event.action = :action', { action: query.action });
     if (query.entityType) builder.andWhere('event.entityType = :entityType', { entityType: query.entityType });
-    if (query.actor) builder.andWhere('(event.actorId = :actor OR actor.email = :actorEmail)', { actor: query.actor, actorEmail: query.actor.toLowerCase() });
+    if (query.actor) {
+      const byEmail = await this.users.findByEmail(query.actor);
+      builder.andWhere('event.actorId IN (:...actors)', { actors: [query.actor, ...(byEmail ? [byEmail.id] : [])] });
+    }
     if (query.from) builder.andWhere('event.at >= :from', { from: auditRangeStart(query.from) });
     if (query.to) builder.andWhere('event.at <= :to', { to: auditRangeEnd(query.to) });
     const rows = await builder.orderBy('event.id', 'DESC').take(query.limit).getMany();
-    return rows.map(toAuditEvent);
+    const actors = await this.users.cards(rows.map((row) => row.actorId));
+    return rows.map((row) => toAuditEvent(row, row.actorId === null ? undefined : actors.get(row.actorId)));
   }
 }
 
-export function toAuditEvent(row: AuditEventEntity): AuditEvent {
+export function toAuditEvent(row: AuditEventEntity, actor: UserCard | undefined): AuditEvent {
   return {
     id: row.id,
     at: row.at.toISOString(),
-    actor: row.actor ? { id: row.actor.id, displayName: row.actor.displayName, email: row.actor.email } : null,
+    actor: actor ? { id: actor.id, displayName: actor.displayName, email: actor.email } : null,
     projectId: row.projectId,
     entityType: row.entityType,
     entityId: row.entityId,

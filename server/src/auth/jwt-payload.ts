@@ -3,4 +3,6 @@ export interface JwtPayload {
   sub: string;
   iat?: number;
   exp?: number;
+  /** Set on tokens that are not access tokens (e-mail confirmation links); an access token has none. */
+  purpose?: string;
 }

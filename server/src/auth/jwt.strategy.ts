@@ -3,9 +3,10 @@ import { PassportStrategy } from '@nestjs/passport';
 import { ExtractJwt, Strategy } from 'passport-jwt';
 import { unauthorized } from '../common/errors/domain-error.js';
 import { AppConfigService } from '../config/app-config.service.js';
-import type { UserEntity } from '../users/user.entity.js';
+import type { Account } from '../users/users.service.js';
 import { UsersService } from '../users/users.service.js';
 import type { JwtPayload } from './jwt-payload.js';
+import { signingKeyOf } from './signing-key.js';
 
 /**
  * Checks the Bearer token's signature and expiry, then loads its user on every request: a user
@@ -19,13 +20,16 @@ export class JwtStrategy extends PassportStrategy(Strategy) {
   ) {
     super({
       jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
-      secretOrKey: config.jwtSecret,
+      secretOrKey: signingKeyOf(config),
       algorithms: ['HS256'],
       ignoreExpiration: false,
     });
   }
 
-  async validate(payload: JwtPayload): Promise<UserEntity> {
+  async validate(payload: JwtPayload): Promise<Account> {
+    // jsonwebtoken checks `exp` only when present: a token that never expires is refused here, and so is a
+    // token minted for another purpose (an e-mail confirmation link is no access token).
+    if (typeof payload.exp !== 'number' || payload.purpose !== undefined) throw unauthorized('UNAUTHENTICATED', 'Sign in to continue');
     const user = typeof payload.sub === 'string' ? await this.users.findById(payload.sub) : null;
     if (!user) throw unauthorized('UNAUTHENTICATED', 'This account no longer exists; sign in again');
     if (user.disabled) throw unauthorized('ACCOUNT_DISABLED', 'This account has been disabled by an admin');

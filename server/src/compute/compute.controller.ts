@@ -12,6 +12,8 @@ import {
 import { Body, Controller, HttpCode, Post } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { ApiZodBody, ApiZodResponse } from '../common/openapi/api-zod.decorators.js';
+import { CurrentUser } from '../common/auth/current-user.decorator.js';
+import type { Account } from '../users/users.service.js';
 import { ComputeService } from './compute.service.js';
 
 /**
@@ -29,23 +31,23 @@ export class ComputeController {
   @HttpCode(200)
   @ApiZodBody(sizeRequestSchema, 'ID, L, VDS, VSB, temperature, corner and exactly one of vov, gmId, w, vgs; PMOS voltages polarity-normalised (VSG, VSD, VBS)')
   @ApiZodResponse(200, sizeResponseSchema)
-  size(@Body() body: SizeRequestInput) {
-    return this.compute.size(body);
+  size(@Body() body: SizeRequestInput, @CurrentUser() user: Account) {
+    return this.compute.size(body, user);
   }
 
   @Post('sweep')
   @HttpCode(200)
   @ApiZodBody(sweepRequestSchema, 'A device and a swept parameter, holding the current (re-size at each point) or the width')
   @ApiZodResponse(200, sweepResponseSchema)
-  sweep(@Body() body: SweepRequestInput) {
-    return this.compute.sweep(body);
+  sweep(@Body() body: SweepRequestInput, @CurrentUser() user: Account) {
+    return this.compute.sweep(body, user);
   }
 
   @Post('corners')
   @HttpCode(200)
   @ApiZodBody(cornersRequestSchema, 'A sized device (w, l) biased by current or by voltage over corners × temperatures')
   @ApiZodResponse(200, cornersResponseSchema)
-  corners(@Body() body: CornersRequestInput) {
-    return this.compute.corners(body);
+  corners(@Body() body: CornersRequestInput, @CurrentUser() user: Account) {
+    return this.compute.corners(body, user);
   }
 }

@@ -20,7 +20,7 @@ export class AppConfigService {
   get dataDir(): string {
     return this.config.dataDir;
   }
-  get jwtSecret(): string {
+  get jwtSecret(): string | undefined {
     return this.config.jwtSecret;
   }
   get jwtTtlSeconds(): number {
@@ -43,5 +43,8 @@ export class AppConfigService {
   }
   get corsOrigins(): readonly string[] {
     return this.config.corsOrigins;
+  }
+  get trustProxyHops(): number {
+    return this.config.trustProxyHops;
   }
 }

@@ -7,10 +7,12 @@ export interface AppConfig {
   port: number;
   /** Absolute folder for the SQLite database and every other file the server writes. */
   dataDir: string;
-  jwtSecret: string;
+  /** JWT_SECRET when set; otherwise the server's own key, generated once and kept in DATA_DIR (auth/signing-key.ts). */
+  jwtSecret?: string;
   jwtTtlSeconds: number;
   /** Outgoing mail server; unset means the server runs its own local mail sink. */
   smtpUrl?: string;
+  /** Self-registration: SIGNUP_ENABLED, else on only with the invented demo data (SEED_DEMO). */
   signupEnabled: boolean;
   seedDemo: boolean;
   /** Base of links in e-mails. */
@@ -19,4 +21,6 @@ export interface AppConfig {
   clientDist: string;
   /** Origins allowed by CORS; empty means CORS stays closed (same origin only). */
   corsOrigins: string[];
+  /** Proxies in front of the server whose X-Forwarded-For is believed (0: none), so sign-in limits count real client addresses. */
+  trustProxyHops: number;
 }

@@ -3,16 +3,12 @@ import { NODE_ENVS } from './app-config.js';
 import { parseDurationSeconds } from './duration.js';
 
 const flag = () => z.stringbool({ error: 'must be true or false (or 1/0, yes/no, on/off)' });
+const wholeNumber = (min: number, max: number, error: string) => z.coerce.number({ error }).int({ error }).min(min, { error }).max(max, { error });
 
 /** The raw environment variables the server reads; empty values count as unset. */
 export const envSchema = z.object({
   NODE_ENV: z.enum(NODE_ENVS, { error: `must be one of ${NODE_ENVS.join(', ')}` }).default('development'),
-  PORT: z.coerce
-    .number({ error: 'must be a whole number from 0 to 65535' })
-    .int({ error: 'must be a whole number from 0 to 65535' })
-    .min(0, { error: 'must be a whole number from 0 to 65535' })
-    .max(65535, { error: 'must be a whole number from 0 to 65535' })
-    .default(3000),
+  PORT: wholeNumber(0, 65535, 'must be a whole number from 0 to 65535').default(3000),
   DATA_DIR: z.string().default('data'),
   JWT_SECRET: z.string().min(16, { error: 'must have at least 16 characters' }).optional(),
   JWT_TTL: z
@@ -27,10 +23,11 @@ export const envSchema = z.object({
       return seconds;
     }),
   SMTP_URL: z.url({ protocol: /^smtps?$/, error: 'must be an smtp:// or smtps:// URL' }).optional(),
-  SIGNUP_ENABLED: flag().default(true),
+  SIGNUP_ENABLED: flag().optional(),
   SEED_DEMO: flag().optional(),
   APP_URL: z.url({ protocol: /^https?$/, error: 'must be an http:// or https:// URL' }).optional(),
   CLIENT_DIST: z.string().default('client/dist'),
   CORS_ORIGINS: z.string().optional(),
+  TRUST_PROXY: wholeNumber(0, 10, 'must be the number of proxies in front of the server (0 for none)').default(0),
 });
 export type Env = z.infer<typeof envSchema>;

@@ -1,6 +1,5 @@
 import { join } from 'node:path';
 import { ConfigError } from './config-error.js';
-import { DEV_JWT_SECRET } from './dev-defaults.js';
 import { loadConfig } from './load-config.js';
 import { REPO_ROOT } from './paths.js';
 
@@ -11,7 +10,6 @@ describe('loadConfig', () => {
       nodeEnv: 'development',
       port: 3000,
       dataDir: join(REPO_ROOT, 'data'),
-      jwtSecret: DEV_JWT_SECRET,
       jwtTtlSeconds: 8 * 3600,
       signupEnabled: true,
       seedDemo: true,
@@ -20,6 +18,15 @@ describe('loadConfig', () => {
       corsOrigins: [],
     });
     expect(config.smtpUrl).toBeUndefined();
+    // No key in the source: without JWT_SECRET the server generates one in DATA_DIR (auth/signing-key.ts).
+    expect(config.jwtSecret).toBeUndefined();
+  });
+
+  it('opens sign-up only with the demo data unless SIGNUP_ENABLED says otherwise', () => {
+    expect(loadConfig({ SEED_DEMO: 'false' }).signupEnabled).toBe(false);
+    expect(loadConfig({ SEED_DEMO: 'true' }).signupEnabled).toBe(true);
+    expect(loadConfig({ SEED_DEMO: 'false', SIGNUP_ENABLED: 'true' }).signupEnabled).toBe(true);
+    expect(loadConfig({ NODE_ENV: 'production', JWT_SECRET: 'p'.repeat(40) }).signupEnabled).toBe(false);
   });
 
   it('resolves relative DATA_DIR and CLIENT_DIST from the repository root, not the working directory', () => {
@@ -47,8 +54,8 @@ describe('loadConfig', () => {
       smtpUrl: 'smtp://mail.fenwick.example:2525',
       appUrl: 'https://cw.fenwick.example',
       corsOrigins: ['https://a.example', 'https://b.example'],
-      jwtSecret: DEV_JWT_SECRET,
     });
+    expect(config.jwtSecret).toBeUndefined();
   });
 
   it('lists every bad variable in one error', () => {

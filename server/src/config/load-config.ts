@@ -1,6 +1,5 @@
 import type { AppConfig } from './app-config.js';
 import { ConfigError, type ConfigProblem } from './config-error.js';
-import { DEV_JWT_SECRET } from './dev-defaults.js';
 import { envSchema, type Env } from './env.schema.js';
 import { fromRepoRoot } from './paths.js';
 
@@ -15,6 +14,7 @@ export function loadConfig(source: EnvSource = process.env): AppConfig {
     );
   }
   const env = parsed.data;
+  const seedDemo = env.SEED_DEMO ?? env.NODE_ENV !== 'production';
   const problems = productionProblems(env);
   if (problems.length > 0) throw new ConfigError(problems);
 
@@ -22,14 +22,16 @@ export function loadConfig(source: EnvSource = process.env): AppConfig {
     nodeEnv: env.NODE_ENV,
     port: env.PORT,
     dataDir: fromRepoRoot(env.DATA_DIR),
-    jwtSecret: env.JWT_SECRET ?? DEV_JWT_SECRET,
+    jwtSecret: env.JWT_SECRET,
     jwtTtlSeconds: env.JWT_TTL,
     smtpUrl: env.SMTP_URL,
-    signupEnabled: env.SIGNUP_ENABLED,
-    seedDemo: env.SEED_DEMO ?? env.NODE_ENV !== 'production',
+    // Open sign-up only where the invented demo invites visitors in; a team's server opts in explicitly.
+    signupEnabled: env.SIGNUP_ENABLED ?? seedDemo,
+    seedDemo,
     appUrl: (env.APP_URL ?? `http://localhost:${env.PORT}`).replace(/\/+$/, ''),
     clientDist: fromRepoRoot(env.CLIENT_DIST),
     corsOrigins: (env.CORS_ORIGINS ?? '').split(',').map((o) => o.trim()).filter(Boolean),
+    trustProxyHops: env.TRUST_PROXY,
   };
 }
 
@@ -37,8 +39,10 @@ export function loadConfig(source: EnvSource = process.env): AppConfig {
 function productionProblems(env: Env): ConfigProblem[] {
   if (env.NODE_ENV !== 'production') return [];
   const problems: ConfigProblem[] = [];
-  if (env.JWT_SECRET === undefined || env.JWT_SECRET === DEV_JWT_SECRET) {
-    problems.push({ variable: 'JWT_SECRET', message: 'set a secret of your own (at least 32 characters); the development default is refused when NODE_ENV=production' });
+  if (env.JWT_SECRET === undefined) {
+    // Outside production the server keeps a generated key in DATA_DIR; a production deployment names its own,
+    // so that every instance and every restore of the data shares it on purpose.
+    problems.push({ variable: 'JWT_SECRET', message: 'set a secret of your own (at least 32 characters) when NODE_ENV=production' });
   } else if (env.JWT_SECRET.length < 32) {
     problems.push({ variable: 'JWT_SECRET', message: 'must have at least 32 characters when NODE_ENV=production' });
   }

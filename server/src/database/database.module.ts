@@ -1,9 +1,16 @@
-import { Module } from '@nestjs/common';
+import { Global, Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { AppConfigService } from '../config/app-config.service.js';
 import { dataSourceOptions } from './data-source-options.js';
+import { DatabaseHealth } from './database-health.js';
+import { UnitOfWork } from './unit-of-work.js';
 
-/** The root connection: entities come from each feature's forFeature, migrations run at start-up. */
+/**
+ * The root connection: entities come from each feature's forFeature, migrations run at start-up. Global,
+ * like configuration: every feature opens its cross-module transactions through UnitOfWork, and only this
+ * module touches the DataSource.
+ */
+@Global()
 @Module({
   imports: [
     TypeOrmModule.forRootAsync({
@@ -15,5 +22,7 @@ import { dataSourceOptions } from './data-source-options.js';
       }),
     }),
   ],
+  providers: [UnitOfWork, DatabaseHealth],
+  exports: [UnitOfWork, DatabaseHealth],
 })
 export class DatabaseModule {}

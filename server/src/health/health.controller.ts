@@ -1,7 +1,7 @@
 import { healthResponseSchema, type HealthResponse } from '@channelwright/shared/schemas';
 import { Controller, Get } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
-import { Public } from '../auth/decorators/public.decorator.js';
+import { Public } from '../common/auth/public.decorator.js';
 import { ApiZodResponse } from '../common/openapi/api-zod.decorators.js';
 import { HealthService } from './health.service.js';
 

@@ -1,7 +1,7 @@
 import { publicConfigSchema, type PublicConfig } from '@channelwright/shared/schemas';
 import { Controller, Get } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
-import { Public } from '../auth/decorators/public.decorator.js';
+import { Public } from '../common/auth/public.decorator.js';
 import { ApiZodResponse } from '../common/openapi/api-zod.decorators.js';
 import { AuthService } from '../auth/auth.service.js';
 import { AppConfigService } from '../config/app-config.service.js';

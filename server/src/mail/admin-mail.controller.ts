@@ -11,7 +11,7 @@ import {
 import { Controller, Get, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { z } from 'zod';
-import { Roles } from '../auth/decorators/roles.decorator.js';
+import { Roles } from '../common/auth/roles.decorator.js';
 import { ApiZodResponse } from '../common/openapi/api-zod.decorators.js';
 import { ZodValidationPipe } from '../common/validation/zod-validation.pipe.js';
 import { MailboxService } from './mailbox.service.js';

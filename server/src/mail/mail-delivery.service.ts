@@ -1,7 +1,6 @@
 import { Inject, Injectable, Logger, type OnApplicationBootstrap, type OnModuleDestroy } from '@nestjs/common';
-import { InjectDataSource } from '@nestjs/typeorm';
-import { LessThanOrEqual, type DataSource } from 'typeorm';
-import { runInTransaction } from '../database/run-in-transaction.js';
+import { LessThanOrEqual } from 'typeorm';
+import { UnitOfWork } from '../database/unit-of-work.js';
 import { MAIL_RETRY_POLICY, retryDelayMs, type MailRetryPolicy } from './mail-retry-policy.js';
 import { MailTransportService } from './mail-transport.service.js';
 import { OutboxMessageEntity } from './outbox-message.entity.js';
@@ -10,7 +9,7 @@ const BATCH = 20;
 
 /**
  * Delivers the outbox. `kick()` starts a round; each round reads the due messages through
- * runInTransaction, which queues behind every transaction already open, so a message written inside
+ * the unit of work, which on SQLite queues behind every transaction already open, so a message written inside
  * a caller's transaction is read only once that transaction has committed (and never if it rolled back).
  * A failure is logged and retried with exponential backoff up to the policy's attempts, then `failed`.
  */
@@ -23,7 +22,7 @@ export class MailDeliveryService implements OnApplicationBootstrap, OnModuleDest
   private stopped = false;
 
   constructor(
-    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly unitOfWork: UnitOfWork,
     private readonly transport: MailTransportService,
     @Inject(MAIL_RETRY_POLICY) private readonly policy: MailRetryPolicy,
   ) {}
@@ -64,7 +63,7 @@ export class MailDeliveryService implements OnApplicationBootstrap, OnModuleDest
 
   private async deliverDue(): Promise<void> {
     for (;;) {
-      const due = await runInTransaction(this.dataSource, (manager) =>
+      const due = await this.unitOfWork.run((manager) =>
         manager.getRepository(OutboxMessageEntity).find({
           where: { state: 'queued', nextAttemptAt: LessThanOrEqual(new Date()) },
           order: { nextAttemptAt: 'ASC' },
@@ -99,13 +98,13 @@ export class MailDeliveryService implements OnApplicationBootstrap, OnModuleDest
   }
 
   private update(id: string, change: Partial<OutboxMessageEntity>): Promise<unknown> {
-    return runInTransaction(this.dataSource, (manager) => manager.getRepository(OutboxMessageEntity).update({ id }, change));
+    return this.unitOfWork.run((manager) => manager.getRepository(OutboxMessageEntity).update({ id }, change));
   }
 
   /** One timer for the earliest queued retry. */
   private async scheduleNextRetry(): Promise<void> {
     if (this.stopped) return;
-    const next = await runInTransaction(this.dataSource, (manager) =>
+    const next = await this.unitOfWork.run((manager) =>
       manager.getRepository(OutboxMessageEntity).findOne({ where: { state: 'queued' }, order: { nextAttemptAt: 'ASC' } }),
     );
     clearTimeout(this.timer);

@@ -1,12 +1,10 @@
 import type { AddressInfo } from 'node:net';
 import type { Readable } from 'node:stream';
 import { Injectable, Logger, type OnModuleDestroy, type OnModuleInit } from '@nestjs/common';
-import { InjectDataSource } from '@nestjs/typeorm';
 import PostalMime from 'postal-mime';
 import { SMTPServer, type SMTPServerDataStream, type SMTPServerSession } from 'smtp-server';
-import type { DataSource } from 'typeorm';
 import { AppConfigService } from '../config/app-config.service.js';
-import { runInTransaction } from '../database/run-in-transaction.js';
+import { UnitOfWork } from '../database/unit-of-work.js';
 import { formatAddress } from './format-address.js';
 import { ReceivedMailEntity } from './received-mail.entity.js';
 
@@ -26,7 +24,7 @@ export class MailSinkService implements OnModuleInit, OnModuleDestroy {
 
   constructor(
     private readonly config: AppConfigService,
-    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly unitOfWork: UnitOfWork,
   ) {}
 
   /** Whether this server runs its own sink (SMTP_URL unset). */
@@ -88,7 +86,7 @@ export class MailSinkService implements OnModuleInit, OnModuleDestroy {
     if (stream.sizeExceeded) return; // rejectOversized answers 552 whatever we say
     const parsed = await PostalMime.parse(raw);
     const envelopeFrom = session.envelope.mailFrom ? session.envelope.mailFrom.address : '';
-    await runInTransaction(this.dataSource, (manager) =>
+    await this.unitOfWork.run((manager) =>
       manager.getRepository(ReceivedMailEntity).insert({
         receivedAt: new Date(),
         sender: (parsed.from ? formatAddress(parsed.from) : envelopeFrom).slice(0, 500),

@@ -1,8 +1,7 @@
 import { Injectable } from '@nestjs/common';
-import { InjectDataSource } from '@nestjs/typeorm';
-import type { DataSource, EntityManager } from 'typeorm';
+import type { EntityManager } from 'typeorm';
 import { AppConfigService } from '../config/app-config.service.js';
-import { runInTransaction } from '../database/run-in-transaction.js';
+import { UnitOfWork } from '../database/unit-of-work.js';
 import { composeMail, type MailNotice } from './compose-mail.js';
 import { MailDeliveryService } from './mail-delivery.service.js';
 import type { MailMessage } from './mail-message.js';
@@ -16,7 +15,7 @@ import { OutboxMessageEntity } from './outbox-message.entity.js';
 @Injectable()
 export class MailService {
   constructor(
-    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly unitOfWork: UnitOfWork,
     private readonly config: AppConfigService,
     private readonly delivery: MailDeliveryService,
   ) {}
@@ -35,7 +34,7 @@ export class MailService {
           nextAttemptAt: new Date(),
         }),
       );
-    const stored = manager ? await write(manager) : await runInTransaction(this.dataSource, write);
+    const stored = manager ? await write(manager) : await this.unitOfWork.run(write);
     this.delivery.kick();
     return stored;
   }

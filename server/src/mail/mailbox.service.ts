@@ -1,18 +1,21 @@
 import type { ListMailQuery, ListOutboxQuery, OutboxMessage, ReceivedMail } from '@channelwright/shared/schemas';
 import { Injectable } from '@nestjs/common';
-import { InjectDataSource } from '@nestjs/typeorm';
-import type { DataSource } from 'typeorm';
+import { InjectRepository } from '@nestjs/typeorm';
+import type { Repository } from 'typeorm';
 import { OutboxMessageEntity } from './outbox-message.entity.js';
 import { ReceivedMailEntity } from './received-mail.entity.js';
 
 /** Reading mail back: what the local sink received, and the outbox with its delivery states. Newest first. */
 @Injectable()
 export class MailboxService {
-  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+  constructor(
+    @InjectRepository(ReceivedMailEntity) private readonly receivedMail: Repository<ReceivedMailEntity>,
+    @InjectRepository(OutboxMessageEntity) private readonly outboxMessages: Repository<OutboxMessageEntity>,
+  ) {}
 
   /** Received messages; `to` matches part of an envelope recipient, `exactTo` the whole address. */
   async received(query: ListMailQuery & { exactTo?: string }): Promise<ReceivedMail[]> {
-    const builder = this.dataSource.getRepository(ReceivedMailEntity).createQueryBuilder('mail');
+    const builder = this.receivedMail.createQueryBuilder('mail');
     if (query.to) builder.andWhere(`EXISTS (SELECT 1 FROM json_each("mail"."recipients") WHERE value LIKE :pattern ESCAPE '\\')`, { pattern: `%${likeEscape(query.to)}%` });
     if (query.exactTo) builder.andWhere(`EXISTS (SELECT 1 FROM json_each("mail"."recipients") WHERE value = :exact)`, { exact: query.exactTo.toLowerCase() });
     const rows = await builder.orderBy('mail.receivedAt', 'DESC').addOrderBy('mail.id').take(query.limit).getMany();
@@ -20,7 +23,7 @@ export class MailboxService {
   }
 
   async outbox(query: ListOutboxQuery): Promise<OutboxMessage[]> {
-    const builder = this.dataSource.getRepository(OutboxMessageEntity).createQueryBuilder('message');
+    const builder = this.outboxMessages.createQueryBuilder('message');
     if (query.to) builder.andWhere(`"message"."recipient" LIKE :pattern ESCAPE '\\'`, { pattern: `%${likeEscape(query.to)}%` });
     if (query.state) builder.andWhere('message.state = :state', { state: query.state });
     const rows = await builder.orderBy('message.createdAt', 'DESC').addOrderBy('message.id').take(query.limit).getMany();

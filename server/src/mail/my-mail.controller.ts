@@ -2,10 +2,10 @@ import { listMailQuerySchema, receivedMailSchema, type ListMailQuery, type Recei
 import { Controller, Get, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { z } from 'zod';
-import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
+import { CurrentUser } from '../common/auth/current-user.decorator.js';
 import { ApiZodResponse } from '../common/openapi/api-zod.decorators.js';
 import { ZodValidationPipe } from '../common/validation/zod-validation.pipe.js';
-import type { UserEntity } from '../users/user.entity.js';
+import type { Account } from '../users/users.service.js';
 import { MailboxService } from './mailbox.service.js';
 
 /**
@@ -20,7 +20,7 @@ export class MyMailController {
 
   @Get('mine')
   @ApiZodResponse(200, z.array(receivedMailSchema), "Messages the local sink received for the signed-in user's address, newest first")
-  mine(@CurrentUser() user: UserEntity, @Query(new ZodValidationPipe(listMailQuerySchema.pick({ limit: true }))) query: Pick<ListMailQuery, 'limit'>): Promise<ReceivedMail[]> {
+  mine(@CurrentUser() user: Account, @Query(new ZodValidationPipe(listMailQuerySchema.pick({ limit: true }))) query: Pick<ListMailQuery, 'limit'>): Promise<ReceivedMail[]> {
     return this.mailbox.received({ limit: query.limit, exactTo: user.email });
   }
 }

@@ -2,11 +2,11 @@ import { importProcessFieldsSchema, PROCESS_IMPORT_MAX_BYTES, processProfileSche
 import { Body, Controller, Post, UploadedFile, UseInterceptors } from '@nestjs/common';
 import { FileInterceptor } from '@nestjs/platform-express';
 import { ApiBearerAuth, ApiBody, ApiConsumes, ApiTags } from '@nestjs/swagger';
-import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
+import { CurrentUser } from '../common/auth/current-user.decorator.js';
 import { DomainError } from '../common/errors/domain-error.js';
 import { ApiZodResponse } from '../common/openapi/api-zod.decorators.js';
 import { ZodValidationPipe } from '../common/validation/zod-validation.pipe.js';
-import type { UserEntity } from '../users/user.entity.js';
+import type { Account } from '../users/users.service.js';
 import { FileTooLargeInterceptor } from './import/file-too-large.interceptor.js';
 import { readProcessFile } from './import/read-process-file.js';
 import { MaintainersOnly } from './process-maintainer.guard.js';
@@ -45,7 +45,7 @@ export class ProcessImportController {
   async import(
     @UploadedFile() file: UploadedProcessFile | undefined,
     @Body(new ZodValidationPipe(importProcessFieldsSchema)) fields: ImportProcessFields,
-    @CurrentUser() user: UserEntity,
+    @CurrentUser() user: Account,
   ): Promise<ProcessProfile> {
     if (!file) throw new DomainError('FILE_REQUIRED', 'Attach the process file in the multipart field "file"', 400, 'file');
     return this.processes.import(readProcessFile(file.buffer, file.originalname), fields, user);

@@ -1,9 +1,9 @@
 import { Injectable, UseGuards, type CanActivate, type ExecutionContext } from '@nestjs/common';
 import { forbidden } from '../common/errors/domain-error.js';
-import type { UserEntity } from '../users/user.entity.js';
+import type { Account } from '../users/users.service.js';
 
 /** Admins, and the users an admin marked as process maintainers, may change the library. */
-export function isProcessMaintainer(user: Pick<UserEntity, 'role' | 'processMaintainer'> | undefined): boolean {
+export function isProcessMaintainer(user: Pick<Account, 'role' | 'processMaintainer'> | undefined): boolean {
   return user !== undefined && (user.role === 'admin' || user.processMaintainer);
 }
 
@@ -11,7 +11,7 @@ export function isProcessMaintainer(user: Pick<UserEntity, 'role' | 'processMain
 @Injectable()
 export class ProcessMaintainerGuard implements CanActivate {
   canActivate(context: ExecutionContext): boolean {
-    const user: UserEntity | undefined = context.switchToHttp().getRequest().user;
+    const user: Account | undefined = context.switchToHttp().getRequest().user;
     if (isProcessMaintainer(user)) return true;
     throw forbidden('NOT_PROCESS_MAINTAINER', 'Only admins and process maintainers may change process profiles');
   }

@@ -1,5 +1,4 @@
-import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn, type Relation } from 'typeorm';
-import { UserEntity } from '../users/user.entity.js';
+import { Column, CreateDateColumn, Entity, ForeignKey, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
 
 /** A named process in the library. Its numbers live in immutable ProcessVersionEntity rows; this row points at the latest. */
 @Entity('process_profiles')
@@ -39,12 +38,10 @@ export class ProcessProfileEntity {
   @UpdateDateColumn()
   updatedAt: Date;
 
+  /** An account (the users module's table, read through UsersService). */
   @Column({ type: 'varchar', nullable: true })
+  @ForeignKey('users', { name: 'FK_process_profiles_updatedBy', onDelete: 'SET NULL' })
   updatedById: string | null;
-
-  @ManyToOne(() => UserEntity, { nullable: true, onDelete: 'SET NULL' })
-  @JoinColumn({ name: 'updatedById', foreignKeyConstraintName: 'FK_process_profiles_updatedBy' })
-  updatedBy: Relation<UserEntity> | null;
 }
 
 /** The key the unique index compares: names differing only in case (or Unicode form) collide. */

@@ -1,19 +1,19 @@
-import { cornerNames, type Process, type ProcessProfile, type ProcessProfileSummary, type ProcessVersionSummary, type UserRef } from '@channelwright/shared/schemas';
-import type { UserEntity } from '../users/user.entity.js';
+import { cornerNames, type Process, type ProcessProfile, type ProcessProfileSummary, type ProcessVersionSummary } from '@channelwright/shared/schemas';
+import { toUserRef } from '../users/user-ref.js';
+import type { UserCard } from '../users/users.service.js';
 import type { ProcessProfileEntity } from './process-profile.entity.js';
 import type { ProcessVersionEntity } from './process-version.entity.js';
+
+/** Accounts by id, as UsersService.cards gives them (for updatedBy and authors). */
+export type UserCards = ReadonlyMap<string, UserCard>;
 
 /** The stored definition of a version. Never re-validated: a version stays readable even if the schema grows stricter. */
 export function definitionOf(version: ProcessVersionEntity): Process {
   return JSON.parse(version.definition) as Process;
 }
 
-export function toUserRef(user: UserEntity | null | undefined): UserRef | null {
-  return user ? { id: user.id, displayName: user.displayName } : null;
-}
-
 /** A row of the library; `latest` is the profile's latest version (its vdd, tnom and corners are shown). */
-export function toProfileSummary(profile: ProcessProfileEntity, latest: ProcessVersionEntity): ProcessProfileSummary {
+export function toProfileSummary(profile: ProcessProfileEntity, latest: ProcessVersionEntity, users: UserCards): ProcessProfileSummary {
   const definition = definitionOf(latest);
   return {
     id: profile.id,
@@ -28,21 +28,21 @@ export function toProfileSummary(profile: ProcessProfileEntity, latest: ProcessV
     corners: cornerNames(definition),
     createdAt: profile.createdAt.toISOString(),
     updatedAt: profile.updatedAt.toISOString(),
-    updatedBy: toUserRef(profile.updatedBy),
+    updatedBy: toUserRef(profile.updatedById === null ? null : users.get(profile.updatedById)),
   };
 }
 
-export function toVersionSummary(version: ProcessVersionEntity): ProcessVersionSummary {
+export function toVersionSummary(version: ProcessVersionEntity, users: UserCards): ProcessVersionSummary {
   return {
     id: version.id,
     number: version.number,
     message: version.message,
-    author: toUserRef(version.author),
+    author: toUserRef(version.authorId === null ? null : users.get(version.authorId)),
     createdAt: version.createdAt.toISOString(),
   };
 }
 
 /** A profile with one version in full. */
-export function toProfile(profile: ProcessProfileEntity, latest: ProcessVersionEntity, shown: ProcessVersionEntity): ProcessProfile {
-  return { ...toProfileSummary(profile, latest), version: { ...toVersionSummary(shown), definition: definitionOf(shown) } };
+export function toProfile(profile: ProcessProfileEntity, latest: ProcessVersionEntity, shown: ProcessVersionEntity, users: UserCards): ProcessProfile {
+  return { ...toProfileSummary(profile, latest, users), version: { ...toVersionSummary(shown, users), definition: definitionOf(shown) } };
 }

@@ -1,5 +1,4 @@
-import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
-import { UserEntity } from '../users/user.entity.js';
+import { Column, CreateDateColumn, Entity, ForeignKey, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
 import { ProcessProfileEntity } from './process-profile.entity.js';
 
 /**
@@ -35,12 +34,10 @@ export class ProcessVersionEntity {
   @Column({ type: 'varchar', length: 500, default: '' })
   message: string;
 
+  /** An account (the users module's table, read through UsersService). */
   @Column({ type: 'varchar', nullable: true })
+  @ForeignKey('users', { name: 'FK_process_versions_author', onDelete: 'SET NULL' })
   authorId: string | null;
-
-  @ManyToOne(() => UserEntity, { nullable: true, onDelete: 'SET NULL' })
-  @JoinColumn({ name: 'authorId', foreignKeyConstraintName: 'FK_process_versions_author' })
-  author: Relation<UserEntity> | null;
 
   @CreateDateColumn()
   createdAt: Date;

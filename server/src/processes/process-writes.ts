@@ -1,16 +1,20 @@
 import { PROCESS_FILE_SCHEMA_VERSION, type Process } from '@channelwright/shared/schemas';
+import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
 import { processVersionAudit } from '../audit/process-audit.js';
-import { recordAudit } from '../audit/record-audit.js';
+import { AuditService } from '../audit/audit.service.js';
 import { conflict, DomainError, notFound } from '../common/errors/domain-error.js';
-import type { UserEntity } from '../users/user.entity.js';
+import { UsersService } from '../users/users.service.js';
 import { diffProcesses } from './process-diff.js';
 import { ProcessProfileEntity, processNameKey } from './process-profile.entity.js';
 import { definitionOf } from './process-response.js';
 import { ProcessVersionEntity } from './process-version.entity.js';
 
 // The writes of the library, on the EntityManager of a transaction the caller opened (the service's
-// runInTransaction, or the demo seed's), so that a profile and its version are stored together or not at all.
+// unit of work, or the demo seed's), so that a profile and its version are stored together or not at all.
+
+/** Who saves: an account id, or null for the system. */
+type Author = { id: string } | null;
 
 export interface NewProfile {
   definition: Process;
@@ -31,62 +35,73 @@ export interface NewVersion {
 /** The field a name clash is reported on: "definition.name" for the JSON API, "name" for an imported file. */
 export type NameField = 'definition.name' | 'name';
 
-/** Stores a new profile with its version 1. */
-export async function insertProfile(manager: EntityManager, input: NewProfile, author: UserEntity | null, nameField: NameField): Promise<ProcessProfileEntity> {
-  await assertNameFree(manager, input.definition.name, undefined, nameField);
-  const profiles = manager.getRepository(ProcessProfileEntity);
-  const profile = await profiles.save(
-    profiles.create({
-      ...namesOf(input.definition),
-      nodeClass: input.nodeClass,
-      demoData: input.demoData ?? false,
-      deprecated: false,
-      latestVersion: 1,
-      updatedById: author?.id ?? null,
-    }),
-  );
-  await insertVersion(manager, profile.id, 1, input.definition, input.message, author);
-  return profile;
-}
+@Injectable()
+export class ProcessWriter {
+  constructor(
+    private readonly audit: AuditService,
+    private readonly users: UsersService,
+  ) {}
 
-/**
- * Saves an edit: a new version when the definition changed (the node class is updated either way).
- * 409 STALE_EDIT when a version newer than baseVersion exists; 400 NO_CHANGES when nothing differs.
- */
-export async function appendVersion(manager: EntityManager, profileId: string, input: NewVersion, author: UserEntity | null, nameField: NameField): Promise<ProcessProfileEntity> {
-  const profiles = manager.getRepository(ProcessProfileEntity);
-  const profile = await profiles.findOneBy({ id: profileId });
-  if (!profile) throw notFound('PROCESS_NOT_FOUND', 'There is no process profile with this id');
-  const latest = await manager.getRepository(ProcessVersionEntity).findOneOrFail({ where: { profileId, number: profile.latestVersion }, relations: { author: true } });
-  if (input.baseVersion > profile.latestVersion) {
-    throw new DomainError('PROCESS_VERSION_NOT_FOUND', `There is no version ${input.baseVersion}; the latest is ${profile.latestVersion}`, 400, 'baseVersion');
+  /** Stores a new profile with its version 1. */
+  async insertProfile(manager: EntityManager, input: NewProfile, author: Author, nameField: NameField): Promise<ProcessProfileEntity> {
+    await assertNameFree(manager, input.definition.name, undefined, nameField);
+    const profiles = manager.getRepository(ProcessProfileEntity);
+    const profile = await profiles.save(
+      profiles.create({
+        ...namesOf(input.definition),
+        nodeClass: input.nodeClass,
+        demoData: input.demoData ?? false,
+        deprecated: false,
+        latestVersion: 1,
+        updatedById: author?.id ?? null,
+      }),
+    );
+    await this.insertVersion(manager, profile.id, 1, input.definition, input.message, author);
+    return profile;
   }
-  if (input.baseVersion !== profile.latestVersion) throw staleEdit(input.baseVersion, latest);
 
-  const definitionChanged = diffProcesses(definitionOf(latest), input.definition).length > 0;
-  const nodeClassChanged = input.nodeClass !== undefined && input.nodeClass !== profile.nodeClass;
-  if (!definitionChanged && !nodeClassChanged) {
-    throw new DomainError('NO_CHANGES', `Nothing changed: this is version ${latest.number} as it is`, 400, 'definition');
+  /**
+   * Saves an edit: a new version when the definition changed (the node class is updated either way).
+   * 409 STALE_EDIT when a version newer than baseVersion exists; 400 NO_CHANGES when nothing differs.
+   */
+  async appendVersion(manager: EntityManager, profileId: string, input: NewVersion, author: Author, nameField: NameField): Promise<ProcessProfileEntity> {
+    const profiles = manager.getRepository(ProcessProfileEntity);
+    const profile = await profiles.findOneBy({ id: profileId });
+    if (!profile) throw notFound('PROCESS_NOT_FOUND', 'There is no process profile with this id');
+    const latest = await manager.getRepository(ProcessVersionEntity).findOneByOrFail({ profileId, number: profile.latestVersion });
+    if (input.baseVersion > profile.latestVersion) {
+      throw new DomainError('PROCESS_VERSION_NOT_FOUND', `There is no version ${input.baseVersion}; the latest is ${profile.latestVersion}`, 400, 'baseVersion');
+    }
+    if (input.baseVersion !== profile.latestVersion) {
+      const who = latest.authorId === null ? undefined : (await this.users.findById(latest.authorId, manager))?.displayName;
+      throw staleEdit(input.baseVersion, latest, who);
+    }
+
+    const definitionChanged = diffProcesses(definitionOf(latest), input.definition).length > 0;
+    const nodeClassChanged = input.nodeClass !== undefined && input.nodeClass !== profile.nodeClass;
+    if (!definitionChanged && !nodeClassChanged) {
+      throw new DomainError('NO_CHANGES', `Nothing changed: this is version ${latest.number} as it is`, 400, 'definition');
+    }
+    if (processNameKey(input.definition.name) !== profile.nameKey) await assertNameFree(manager, input.definition.name, profile.id, nameField);
+    if (definitionChanged) {
+      profile.latestVersion += 1;
+      await this.insertVersion(manager, profile.id, profile.latestVersion, input.definition, input.message, author);
+    }
+    Object.assign(profile, namesOf(input.definition), { nodeClass: input.nodeClass ?? profile.nodeClass, updatedById: author?.id ?? null });
+    return profiles.save(profile);
   }
-  if (processNameKey(input.definition.name) !== profile.nameKey) await assertNameFree(manager, input.definition.name, profile.id, nameField);
-  if (definitionChanged) {
-    profile.latestVersion += 1;
-    await insertVersion(manager, profile.id, profile.latestVersion, input.definition, input.message, author);
+
+  private async insertVersion(manager: EntityManager, profileId: string, number: number, definition: Process, message: string, author: Author): Promise<void> {
+    const versions = manager.getRepository(ProcessVersionEntity);
+    await versions.insert(
+      versions.create({ profileId, number, schemaVersion: PROCESS_FILE_SCHEMA_VERSION, definition: JSON.stringify(definition), message, authorId: author?.id ?? null }),
+    );
+    await this.audit.record(manager, processVersionAudit(profileId, number, definition.name, message, author));
   }
-  Object.assign(profile, namesOf(input.definition), { nodeClass: input.nodeClass ?? profile.nodeClass, updatedById: author?.id ?? null });
-  return profiles.save(profile);
 }
 
 function namesOf(definition: Process) {
   return { name: definition.name, nameKey: processNameKey(definition.name), description: definition.description ?? '' };
-}
-
-async function insertVersion(manager: EntityManager, profileId: string, number: number, definition: Process, message: string, author: UserEntity | null): Promise<void> {
-  const versions = manager.getRepository(ProcessVersionEntity);
-  await versions.insert(
-    versions.create({ profileId, number, schemaVersion: PROCESS_FILE_SCHEMA_VERSION, definition: JSON.stringify(definition), message, authorId: author?.id ?? null }),
-  );
-  await recordAudit(manager, processVersionAudit(profileId, number, definition.name, message, author));
 }
 
 async function assertNameFree(manager: EntityManager, name: string, exceptId: string | undefined, field: NameField): Promise<void> {
@@ -94,8 +109,8 @@ async function assertNameFree(manager: EntityManager, name: string, exceptId: st
   if (other && other.id !== exceptId) throw conflict('PROCESS_NAME_TAKEN', `A process profile named ${other.name} exists already; choose another name`, field);
 }
 
-function staleEdit(baseVersion: number, latest: ProcessVersionEntity): DomainError {
-  const who = latest.author?.displayName ?? 'someone';
+function staleEdit(baseVersion: number, latest: ProcessVersionEntity, author: string | undefined): DomainError {
+  const who = author ?? 'someone';
   return conflict(
     'STALE_EDIT',
     `Version ${latest.number} was saved by ${who} at ${latest.createdAt.toISOString()}, after version ${baseVersion} you edited; nothing was saved. Reload, then make your change again.`,

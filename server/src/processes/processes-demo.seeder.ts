@@ -3,8 +3,8 @@ import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
 import { DEMO_ACCOUNTS } from '../seed/demo-accounts.js';
 import type { DemoSeeder } from '../seed/demo-seeder.js';
-import { UserEntity } from '../users/user.entity.js';
-import { insertProfile } from './process-writes.js';
+import { UsersService } from '../users/users.service.js';
+import { ProcessWriter } from './process-writes.js';
 
 /** Node classes of the invented demo processes (invented demo data, not any foundry's process). */
 const DEMO_NODE_CLASSES: Readonly<Record<string, string>> = { 'BF180-G': '180 nm', 'BF130-G': '130 nm' };
@@ -14,10 +14,15 @@ const DEMO_NODE_CLASSES: Readonly<Record<string, string>> = { 'BF180-G': '180 nm
 export class ProcessesDemoSeeder implements DemoSeeder {
   readonly order = 10;
 
+  constructor(
+    private readonly writer: ProcessWriter,
+    private readonly users: UsersService,
+  ) {}
+
   async seed(manager: EntityManager): Promise<void> {
-    const admin = await manager.getRepository(UserEntity).findOneByOrFail({ email: DEMO_ACCOUNTS.admin.email });
+    const admin = await this.users.findByEmail(DEMO_ACCOUNTS.admin.email, manager);
     for (const definition of DEMO_PROCESSES) {
-      await insertProfile(
+      await this.writer.insertProfile(
         manager,
         { definition, nodeClass: DEMO_NODE_CLASSES[definition.name] ?? '', message: DEMO_DATA_NOTICE, demoData: true },
         admin,

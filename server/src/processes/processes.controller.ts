@@ -26,14 +26,14 @@ import { Body, Controller, Delete, Get, HttpCode, Param, Post, Put, Query, Res }
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import { z } from 'zod';
-import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
+import { CurrentUser } from '../common/auth/current-user.decorator.js';
 import { ApiZodBody, ApiZodResponse } from '../common/openapi/api-zod.decorators.js';
 import { ZodValidationPipe } from '../common/validation/zod-validation.pipe.js';
-import type { UserEntity } from '../users/user.entity.js';
+import type { Account } from '../users/users.service.js';
 import { MaintainersOnly } from './process-maintainer.guard.js';
 import { ProcessesService } from './processes.service.js';
 
-/** The library: everyone signed in reads; admins and process maintainers write. */
+/** The library: each reads what ProcessVisibility lets them see; admins and process maintainers write. */
 @ApiTags('processes')
 @ApiBearerAuth()
 @Controller('processes')
@@ -42,22 +42,22 @@ export class ProcessesController {
 
   @Get()
   @ApiZodResponse(200, z.array(processProfileSummarySchema), 'The latest version of every profile, by name')
-  list(@Query(new ZodValidationPipe(listProcessesQuerySchema)) query: ListProcessesQuery): Promise<ProcessProfileSummary[]> {
-    return this.processes.list(query);
+  list(@Query(new ZodValidationPipe(listProcessesQuerySchema)) query: ListProcessesQuery, @CurrentUser() user: Account): Promise<ProcessProfileSummary[]> {
+    return this.processes.list(query, user);
   }
 
   @Post()
   @MaintainersOnly()
   @ApiZodBody(createProcessRequestSchema)
   @ApiZodResponse(201, processProfileSchema, 'The new profile with its version 1 (maintainers only)')
-  create(@Body(new ZodValidationPipe(createProcessRequestSchema)) request: CreateProcessRequest, @CurrentUser() user: UserEntity): Promise<ProcessProfile> {
+  create(@Body(new ZodValidationPipe(createProcessRequestSchema)) request: CreateProcessRequest, @CurrentUser() user: Account): Promise<ProcessProfile> {
     return this.processes.create(request, user);
   }
 
   @Get(':id')
   @ApiZodResponse(200, processProfileSchema, 'The profile with one version in full (?version=, else the latest)')
-  get(@Param('id') id: string, @Query(new ZodValidationPipe(processVersionQuerySchema)) query: ProcessVersionQuery): Promise<ProcessProfile> {
-    return this.processes.get(id, query.version);
+  get(@Param('id') id: string, @Query(new ZodValidationPipe(processVersionQuerySchema)) query: ProcessVersionQuery, @CurrentUser() user: Account): Promise<ProcessProfile> {
+    return this.processes.get(id, user, query.version);
   }
 
   @Put(':id')
@@ -67,7 +67,7 @@ export class ProcessesController {
   update(
     @Param('id') id: string,
     @Body(new ZodValidationPipe(updateProcessRequestSchema)) request: UpdateProcessRequest,
-    @CurrentUser() user: UserEntity,
+    @CurrentUser() user: Account,
   ): Promise<ProcessProfile> {
     return this.processes.update(id, request, user);
   }
@@ -82,14 +82,14 @@ export class ProcessesController {
 
   @Get(':id/versions')
   @ApiZodResponse(200, z.array(processVersionSummarySchema), 'Every version, newest first')
-  versions(@Param('id') id: string): Promise<ProcessVersionSummary[]> {
-    return this.processes.versions(id);
+  versions(@Param('id') id: string, @CurrentUser() user: Account): Promise<ProcessVersionSummary[]> {
+    return this.processes.versions(id, user);
   }
 
   @Get(':id/diff')
   @ApiZodResponse(200, processDiffSchema, 'Which values changed from version `from` to version `to`')
-  diff(@Param('id') id: string, @Query(new ZodValidationPipe(processDiffQuerySchema)) query: ProcessDiffQuery): Promise<ProcessDiff> {
-    return this.processes.diff(id, query.from, query.to);
+  diff(@Param('id') id: string, @Query(new ZodValidationPipe(processDiffQuerySchema)) query: ProcessDiffQuery, @CurrentUser() user: Account): Promise<ProcessDiff> {
+    return this.processes.diff(id, user, query.from, query.to);
   }
 
   @Post(':id/deprecate')
@@ -100,7 +100,7 @@ export class ProcessesController {
   deprecate(
     @Param('id') id: string,
     @Body(new ZodValidationPipe(deprecateProcessRequestSchema)) request: DeprecateProcessRequest,
-    @CurrentUser() user: UserEntity,
+    @CurrentUser() user: Account,
   ): Promise<ProcessProfile> {
     return this.processes.setDeprecated(id, request.deprecated, user);
   }
@@ -111,8 +111,9 @@ export class ProcessesController {
     @Param('id') id: string,
     @Query(new ZodValidationPipe(processVersionQuerySchema)) query: ProcessVersionQuery,
     @Res({ passthrough: true }) response: Response,
+    @CurrentUser() user: Account,
   ): Promise<ProcessFile> {
-    const { fileName, file } = await this.processes.exportFile(id, query.version);
+    const { fileName, file } = await this.processes.exportFile(id, user, query.version);
     response.attachment(fileName);
     return file;
   }

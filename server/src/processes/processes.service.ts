@@ -11,18 +11,21 @@ import type {
 } from '@channelwright/shared/schemas';
 import { PROCESS_FILE_FORMAT, PROCESS_FILE_SCHEMA_VERSION } from '@channelwright/shared/schemas';
 import { Injectable } from '@nestjs/common';
-import { InjectDataSource } from '@nestjs/typeorm';
-import { QueryFailedError, type DataSource, type EntityManager } from 'typeorm';
+import { InjectRepository } from '@nestjs/typeorm';
+import { In, QueryFailedError, type EntityManager, type Repository } from 'typeorm';
 import { conflict, DomainError, notFound } from '../common/errors/domain-error.js';
-import { runInTransaction } from '../database/run-in-transaction.js';
-import type { UserEntity } from '../users/user.entity.js';
+import { findReferences } from '../database/foreign-key-references.js';
+import { UnitOfWork } from '../database/unit-of-work.js';
+import { UsersService } from '../users/users.service.js';
 import type { ImportedProcess } from './import/read-process-file.js';
 import { diffProcesses } from './process-diff.js';
-import { ProcessProfileEntity } from './process-profile.entity.js';
-import { findProcessReferences } from './process-references.js';
+import { ProcessProfileEntity, processNameKey } from './process-profile.entity.js';
 import { definitionOf, toProfile, toProfileSummary, toVersionSummary } from './process-response.js';
 import { ProcessVersionEntity } from './process-version.entity.js';
-import { appendVersion, insertProfile } from './process-writes.js';
+import { ProcessVisibility, type ProcessViewer } from './process-visibility.js';
+import { ProcessWriter } from './process-writes.js';
+
+const OWN_TABLES = new Set(['process_profiles', 'process_versions']);
 
 /** One version of a stored process, as the compute API and sheets use it. */
 export interface ResolvedProcess {
@@ -36,6 +39,13 @@ export interface ResolvedProcess {
   definition: Process;
 }
 
+/** A process version as other modules show it: its number, and its profile's newest. */
+export interface VersionFacts {
+  profileId: string;
+  number: number;
+  latestVersion: number;
+}
+
 /** Where an imported file goes: a new profile, or a new version of one. */
 export interface ImportTarget {
   nodeClass?: string;
@@ -44,93 +54,112 @@ export interface ImportTarget {
   baseVersion?: number;
 }
 
-/** The process-profile library: reads for everyone signed in, writes (callers check maintainers) in one transaction each. */
+/** An account that saves (the callers check maintainers). */
+type Author = { id: string };
+
+/**
+ * The process-profile library: reads for whoever may see a profile (ProcessVisibility: a profile the reader
+ * may not see is as absent as one that does not exist), writes (callers check maintainers) in one
+ * transaction each.
+ */
 @Injectable()
 export class ProcessesService {
-  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+  constructor(
+    @InjectRepository(ProcessProfileEntity) private readonly profiles: Repository<ProcessProfileEntity>,
+    @InjectRepository(ProcessVersionEntity) private readonly versionRows: Repository<ProcessVersionEntity>,
+    private readonly unitOfWork: UnitOfWork,
+    private readonly writer: ProcessWriter,
+    private readonly users: UsersService,
+    private readonly visibility: ProcessVisibility,
+  ) {}
 
-  /** The latest version of every profile, by name; deprecated ones only when asked; `search` matches name, node class or description. */
-  async list(query: ListProcessesQuery): Promise<ProcessProfileSummary[]> {
-    const profiles = await this.dataSource.getRepository(ProcessProfileEntity).find({
+  /** The latest version of every profile the viewer may see, by name; deprecated ones only when asked; `search` matches name, node class or description. */
+  async list(query: ListProcessesQuery, viewer: ProcessViewer): Promise<ProcessProfileSummary[]> {
+    const visible = await this.visibility.visibleTo(viewer);
+    const profiles = await this.profiles.find({
       where: query.includeDeprecated ? {} : { deprecated: false },
-      relations: { updatedBy: true },
       order: { nameKey: 'ASC' },
     });
     const needle = query.search?.toLowerCase();
-    const found = needle ? profiles.filter((p) => [p.name, p.nodeClass, p.description].some((text) => text.toLowerCase().includes(needle))) : profiles;
+    const found = profiles
+      .filter((p) => visible === 'all' || visible.has(p.id))
+      .filter((p) => !needle || [p.name, p.nodeClass, p.description].some((text) => text.toLowerCase().includes(needle)));
     const latest = await this.latestVersions(found);
-    return found.map((profile) => toProfileSummary(profile, latest.get(profile.id)!));
+    const users = await this.users.cards(found.map((p) => p.updatedById));
+    return found.map((profile) => toProfileSummary(profile, latest.get(profile.id)!, users));
   }
 
   /** A profile with one version in full: `version`, or the latest. */
-  async get(id: string, version?: number): Promise<ProcessProfile> {
-    const profile = await this.profile(id);
-    const latest = await this.version(this.dataSource.manager, profile.id, profile.latestVersion, 'version');
-    const shown = version === undefined || version === latest.number ? latest : await this.version(this.dataSource.manager, profile.id, version, 'version');
-    return toProfile(profile, latest, shown);
+  async get(id: string, viewer: ProcessViewer, version?: number): Promise<ProcessProfile> {
+    const profile = await this.visibleProfile(id, viewer);
+    return this.present(profile, version);
   }
 
   /** Every version, newest first. */
-  async versions(id: string): Promise<ProcessVersionSummary[]> {
-    const profile = await this.profile(id);
-    const versions = await this.dataSource.getRepository(ProcessVersionEntity).find({
-      where: { profileId: profile.id },
-      relations: { author: true },
-      order: { number: 'DESC' },
-    });
-    return versions.map(toVersionSummary);
+  async versions(id: string, viewer: ProcessViewer): Promise<ProcessVersionSummary[]> {
+    const profile = await this.visibleProfile(id, viewer);
+    const versions = await this.versionRows.find({ where: { profileId: profile.id }, order: { number: 'DESC' } });
+    const users = await this.users.cards(versions.map((v) => v.authorId));
+    return versions.map((version) => toVersionSummary(version, users));
   }
 
   /** What changed from version `from` to `to` (defaults: the latest and the one before it). */
-  async diff(id: string, from?: number, to?: number): Promise<ProcessDiff> {
-    const profile = await this.profile(id);
+  async diff(id: string, viewer: ProcessViewer, from?: number, to?: number): Promise<ProcessDiff> {
+    const profile = await this.visibleProfile(id, viewer);
     const toNumber = to ?? profile.latestVersion;
     const fromNumber = from ?? Math.max(1, toNumber - 1);
-    const manager = this.dataSource.manager;
+    const manager = this.unitOfWork.manager;
     const [older, newer] = [await this.version(manager, profile.id, fromNumber, 'from'), await this.version(manager, profile.id, toNumber, 'to')];
     return { profileId: profile.id, from: fromNumber, to: toNumber, changes: diffProcesses(definitionOf(older), definitionOf(newer)) };
   }
 
-  async create(request: CreateProcessRequest, author: UserEntity): Promise<ProcessProfile> {
-    const profile = await runInTransaction(this.dataSource, (manager) => insertProfile(manager, request, author, 'definition.name'));
-    return this.get(profile.id);
+  async create(request: CreateProcessRequest, author: Author): Promise<ProcessProfile> {
+    const profile = await this.unitOfWork.run((manager) => this.writer.insertProfile(manager, request, author, 'definition.name'));
+    return this.present(profile);
   }
 
   /** A new version from the edit of `baseVersion`; 409 STALE_EDIT (nothing written) when someone saved after it. */
-  async update(id: string, request: UpdateProcessRequest, author: UserEntity): Promise<ProcessProfile> {
-    const profile = await runInTransaction(this.dataSource, (manager) => appendVersion(manager, id, request, author, 'definition.name'));
-    return this.get(profile.id);
+  async update(id: string, request: UpdateProcessRequest, author: Author): Promise<ProcessProfile> {
+    const profile = await this.unitOfWork.run((manager) => this.writer.appendVersion(manager, id, request, author, 'definition.name'));
+    return this.present(profile);
   }
 
   /** Stores an imported file as a new profile, or as a new version of `target.profileId` edited from `target.baseVersion`. */
-  async import(file: ImportedProcess, target: ImportTarget, author: UserEntity): Promise<ProcessProfile> {
+  async import(file: ImportedProcess, target: ImportTarget, author: Author): Promise<ProcessProfile> {
     const nodeClass = target.nodeClass ?? file.nodeClass;
     const message = target.message ?? 'Imported from a file';
-    const profile = await runInTransaction(this.dataSource, (manager) =>
+    const profile = await this.unitOfWork.run((manager) =>
       target.profileId !== undefined && target.baseVersion !== undefined
-        ? appendVersion(manager, target.profileId, { baseVersion: target.baseVersion, definition: file.definition, nodeClass, message }, author, 'name')
-        : insertProfile(manager, { definition: file.definition, nodeClass: nodeClass ?? '', message }, author, 'name'),
+        ? this.writer.appendVersion(manager, target.profileId, { baseVersion: target.baseVersion, definition: file.definition, nodeClass, message }, author, 'name')
+        : this.writer.insertProfile(manager, { definition: file.definition, nodeClass: nodeClass ?? '', message }, author, 'name'),
     );
-    return this.get(profile.id);
+    return this.present(profile);
   }
 
-  async setDeprecated(id: string, deprecated: boolean, author: UserEntity): Promise<ProcessProfile> {
-    await runInTransaction(this.dataSource, async (manager) => {
+  async setDeprecated(id: string, deprecated: boolean, author: Author): Promise<ProcessProfile> {
+    const profile = await this.unitOfWork.run(async (manager) => {
       const repository = manager.getRepository(ProcessProfileEntity);
-      const profile = await repository.findOneBy({ id });
-      if (!profile) throw profileNotFound();
-      if (profile.deprecated !== deprecated) await repository.save(Object.assign(profile, { deprecated, updatedById: author.id }));
+      const found = await repository.findOneBy({ id });
+      if (!found) throw profileNotFound();
+      return found.deprecated === deprecated ? found : repository.save(Object.assign(found, { deprecated, updatedById: author.id }));
     });
-    return this.get(id);
+    return this.present(profile);
   }
 
   /** Deletes a profile with all its versions; 409 PROCESS_IN_USE when any row of another table refers to it. */
   async remove(id: string): Promise<void> {
     try {
-      await runInTransaction(this.dataSource, async (manager) => {
+      await this.unitOfWork.run(async (manager) => {
         const profile = await manager.getRepository(ProcessProfileEntity).findOneBy({ id });
         if (!profile) throw profileNotFound();
-        const references = await findProcessReferences(manager, id);
+        const references = await findReferences(
+          manager,
+          [
+            { table: 'process_profiles', where: '"id" = ?', params: [id] },
+            { table: 'process_versions', where: '"profileId" = ?', params: [id] },
+          ],
+          OWN_TABLES,
+        );
         if (references.length > 0) {
           const uses = references.map((r) => `${r.count} in ${r.table}`).join(', ');
           throw conflict('PROCESS_IN_USE', `${profile.name} is in use (${uses}) and cannot be deleted; deprecate it instead`);
@@ -148,8 +177,8 @@ export class ProcessesService {
   }
 
   /** One version as our exchange file. */
-  async exportFile(id: string, version?: number): Promise<{ fileName: string; file: ProcessFile }> {
-    const profile = await this.get(id, version);
+  async exportFile(id: string, viewer: ProcessViewer, version?: number): Promise<{ fileName: string; file: ProcessFile }> {
+    const profile = await this.get(id, viewer, version);
     const file: ProcessFile = {
       format: PROCESS_FILE_FORMAT,
       schemaVersion: PROCESS_FILE_SCHEMA_VERSION,
@@ -164,39 +193,62 @@ export class ProcessesService {
 
   /**
    * The definition of a stored process for computations: `version`, or the latest when absent.
-   * 404 PROCESS_NOT_FOUND (field processId) or PROCESS_VERSION_NOT_FOUND (field processVersion).
+   * 404 PROCESS_NOT_FOUND (field processId) or PROCESS_VERSION_NOT_FOUND (field processVersion), and
+   * PROCESS_NOT_FOUND too when a `viewer` is given who may not see the profile.
    * Pass the manager of an open transaction to read inside it.
    */
-  async resolveDefinition(processId: string, version?: number, manager: EntityManager = this.dataSource.manager): Promise<ResolvedProcess> {
+  async resolveDefinition(processId: string, version?: number, manager: EntityManager = this.unitOfWork.manager, viewer?: ProcessViewer): Promise<ResolvedProcess> {
     const profile = await manager.getRepository(ProcessProfileEntity).findOneBy({ id: processId });
-    if (!profile) throw new DomainError('PROCESS_NOT_FOUND', 'There is no process profile with this id', 404, 'processId');
+    if (!profile || (viewer && !(await this.visibility.sees(viewer, profile.id)))) {
+      throw new DomainError('PROCESS_NOT_FOUND', 'There is no process profile with this id', 404, 'processId');
+    }
     const row = await this.version(manager, profile.id, version ?? profile.latestVersion, 'processVersion');
     return resolved(profile, row);
   }
 
   /** The same for a version id, as a sheet's foreign key holds it; 404 PROCESS_VERSION_NOT_FOUND (field processVersionId). */
-  async resolveVersion(versionId: string, manager: EntityManager = this.dataSource.manager): Promise<ResolvedProcess> {
+  async resolveVersion(versionId: string, manager: EntityManager = this.unitOfWork.manager): Promise<ResolvedProcess> {
     const row = await manager.getRepository(ProcessVersionEntity).findOne({ where: { id: versionId }, relations: { profile: true } });
     if (!row) throw new DomainError('PROCESS_VERSION_NOT_FOUND', 'There is no process version with this id', 404, 'processVersionId');
     return resolved(row.profile, row);
   }
 
-  private async profile(id: string): Promise<ProcessProfileEntity> {
-    const profile = await this.dataSource.getRepository(ProcessProfileEntity).findOne({ where: { id }, relations: { updatedBy: true } });
-    if (!profile) throw profileNotFound();
+  /** Number, profile and the profile's newest version of each version id. */
+  async versionFacts(versionIds: Iterable<string>, manager: EntityManager = this.unitOfWork.manager): Promise<Map<string, VersionFacts>> {
+    const ids = [...new Set(versionIds)];
+    if (ids.length === 0) return new Map();
+    const rows = await manager.getRepository(ProcessVersionEntity).find({ where: { id: In(ids) }, relations: { profile: true } });
+    return new Map(rows.map((row) => [row.id, { profileId: row.profileId, number: row.number, latestVersion: row.profile.latestVersion }]));
+  }
+
+  /** The id of the profile with this name (any case), or null. */
+  async profileIdByName(name: string, manager: EntityManager = this.unitOfWork.manager): Promise<string | null> {
+    return (await manager.getRepository(ProcessProfileEntity).findOneBy({ nameKey: processNameKey(name) }))?.id ?? null;
+  }
+
+  private async present(profile: ProcessProfileEntity, version?: number): Promise<ProcessProfile> {
+    const manager = this.unitOfWork.manager;
+    const latest = await this.version(manager, profile.id, profile.latestVersion, 'version');
+    const shown = version === undefined || version === latest.number ? latest : await this.version(manager, profile.id, version, 'version');
+    const users = await this.users.cards([profile.updatedById, latest.authorId, shown.authorId]);
+    return toProfile(profile, latest, shown, users);
+  }
+
+  private async visibleProfile(id: string, viewer: ProcessViewer): Promise<ProcessProfileEntity> {
+    const profile = await this.profiles.findOneBy({ id });
+    if (!profile || !(await this.visibility.sees(viewer, profile.id))) throw profileNotFound();
     return profile;
   }
 
   private async version(manager: EntityManager, profileId: string, number: number, field: string): Promise<ProcessVersionEntity> {
-    const version = await manager.getRepository(ProcessVersionEntity).findOne({ where: { profileId, number }, relations: { author: true } });
+    const version = await manager.getRepository(ProcessVersionEntity).findOneBy({ profileId, number });
     if (!version) throw new DomainError('PROCESS_VERSION_NOT_FOUND', `This profile has no version ${number}`, 404, field);
     return version;
   }
 
   private async latestVersions(profiles: ProcessProfileEntity[]): Promise<Map<string, ProcessVersionEntity>> {
     if (profiles.length === 0) return new Map();
-    const rows = await this.dataSource
-      .getRepository(ProcessVersionEntity)
+    const rows = await this.versionRows
       .createQueryBuilder('version')
       .innerJoin(ProcessProfileEntity, 'profile', 'profile.id = version.profileId AND profile.latestVersion = version.number')
       .where('version.profileId IN (:...ids)', { ids: profiles.map((p) => p.id) })

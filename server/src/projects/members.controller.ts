@@ -32,7 +32,7 @@ export class MembersController {
   @Post()
   @ProjectAccess('manage')
   @ApiZodBody(addMemberRequestSchema)
-  @ApiZodResponse(201, projectMemberSchema, '404 USER_NOT_FOUND (field email); 409 MEMBER_EXISTS')
+  @ApiZodResponse(201, projectMemberSchema, 'The same answer whether or not the address has an account (no account enumeration): one with an active account is added and mailed, any other address is mailed how to get one; 409 MEMBER_EXISTS')
   add(@CurrentProjectAccess() access: ProjectAccessContext, @Body(new ZodValidationPipe(addMemberRequestSchema)) request: AddMemberRequest): Promise<ProjectMember> {
     return this.members.add(access.projectId, request);
   }

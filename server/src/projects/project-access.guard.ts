@@ -1,6 +1,6 @@
 import { applyDecorators, createParamDecorator, Injectable, SetMetadata, UseGuards, type CanActivate, type ExecutionContext } from '@nestjs/common';
 import { ModuleRef, Reflector } from '@nestjs/core';
-import type { UserEntity } from '../users/user.entity.js';
+import type { Account } from '../users/users.service.js';
 import { ProjectAccessService, projectNotFound, type ProjectAccess as Access } from './project-access.service.js';
 import type { ProjectNeed } from './project-need.js';
 import { PROJECT_RESOURCE_RESOLVERS, type ProjectResourceResolver } from './project-resource-resolver.js';
@@ -44,7 +44,7 @@ export class ProjectAccessGuard implements CanActivate {
     const rule = this.reflector.get<AccessRule | undefined>(PROJECT_ACCESS_KEY, context.getHandler());
     if (!rule) throw new Error('ProjectAccessGuard used without @ProjectAccess()');
     const request = context.switchToHttp().getRequest();
-    const user: UserEntity = request.user;
+    const user: Account = request.user;
     const resourceId = String(request.params[rule.param] ?? '');
     const resolver = rule.kind === 'project' ? undefined : this.resolver(rule.kind);
     const projectId = resolver ? await resolver.projectIdOf(resourceId) : resourceId;

@@ -1,9 +1,9 @@
-import type { ProjectRole } from '@channelwright/shared/schemas';
+import type { GlobalRole, ProjectRole } from '@channelwright/shared/schemas';
 import { Injectable } from '@nestjs/common';
-import { InjectDataSource } from '@nestjs/typeorm';
-import type { DataSource, EntityManager } from 'typeorm';
+import type { EntityManager } from 'typeorm';
+import { UnitOfWork } from '../database/unit-of-work.js';
 import { type DomainError, forbidden, notFound } from '../common/errors/domain-error.js';
-import type { UserEntity } from '../users/user.entity.js';
+
 import { meetsNeed, rolesFor, seesProject, type ProjectNeed } from './project-need.js';
 import { ProjectMemberEntity } from './project-member.entity.js';
 import { ProjectEntity } from './project.entity.js';
@@ -32,10 +32,10 @@ export const projectNotFound = (): DomainError => notFound('PROJECT_NOT_FOUND', 
  */
 @Injectable()
 export class ProjectAccessService {
-  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+  constructor(private readonly unitOfWork: UnitOfWork) {}
 
-  async require(user: UserEntity, projectId: string, need: ProjectNeed, options: RequireOptions = {}): Promise<ProjectAccess> {
-    const manager = options.manager ?? this.dataSource.manager;
+  async require(user: { id: string; role: GlobalRole }, projectId: string, need: ProjectNeed, options: RequireOptions = {}): Promise<ProjectAccess> {
+    const manager = options.manager ?? this.unitOfWork.manager;
     const missing = options.notFound ?? projectNotFound;
     const exists = await manager.getRepository(ProjectEntity).existsBy({ id: projectId });
     if (!exists) throw missing();
@@ -49,7 +49,7 @@ export class ProjectAccessService {
   }
 
   /** A user's role in a project, or null when not a member. */
-  async roleOf(projectId: string, userId: string, manager: EntityManager = this.dataSource.manager): Promise<ProjectRole | null> {
+  async roleOf(projectId: string, userId: string, manager: EntityManager = this.unitOfWork.manager): Promise<ProjectRole | null> {
     const member = await manager.getRepository(ProjectMemberEntity).findOneBy({ projectId, userId });
     return member?.role ?? null;
   }

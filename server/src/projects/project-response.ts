@@ -1,5 +1,6 @@
 import type { Project, ProjectMember, ProjectRole } from '@channelwright/shared/schemas';
-import { toUserRef } from '../processes/process-response.js';
+import { toUserRef } from '../users/user-ref.js';
+import type { UserCard } from '../users/users.service.js';
 import type { ProjectMemberEntity } from './project-member.entity.js';
 import type { ProjectEntity } from './project.entity.js';
 
@@ -8,14 +9,14 @@ export interface ProjectCounts {
   sheetCount: number;
 }
 
-export function toProject(project: ProjectEntity, myRole: ProjectRole | null, counts: ProjectCounts): Project {
+export function toProject(project: ProjectEntity, myRole: ProjectRole | null, counts: ProjectCounts, createdBy: UserCard | undefined): Project {
   return {
     id: project.id,
     name: project.name,
     description: project.description,
     version: project.version,
     myRole,
-    createdBy: toUserRef(project.createdBy),
+    createdBy: toUserRef(createdBy),
     memberCount: counts.memberCount,
     sheetCount: counts.sheetCount,
     createdAt: project.createdAt.toISOString(),
@@ -23,12 +24,12 @@ export function toProject(project: ProjectEntity, myRole: ProjectRole | null, co
   };
 }
 
-/** A member with its user loaded. */
-export function toMember(member: ProjectMemberEntity): ProjectMember {
+/** A member with its account's name and address. */
+export function toMember(member: ProjectMemberEntity, user: UserCard): ProjectMember {
   return {
     userId: member.userId,
-    email: member.user.email,
-    displayName: member.user.displayName,
+    email: user.email,
+    displayName: user.displayName,
     role: member.role,
     addedAt: member.createdAt.toISOString(),
   };

@@ -1,5 +1,4 @@
-import { Column, CreateDateColumn, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn, type Relation } from 'typeorm';
-import { UserEntity } from '../users/user.entity.js';
+import { Column, CreateDateColumn, Entity, ForeignKey, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
 
 /** A project: the sheets of one chip block and the people who work on them (ProjectMemberEntity). */
 @Entity('projects')
@@ -17,12 +16,10 @@ export class ProjectEntity {
   @Column({ type: 'integer', default: 1 })
   version: number;
 
+  /** An account (the users module's table, read through UsersService). */
   @Column({ type: 'varchar', nullable: true })
+  @ForeignKey('users', { name: 'FK_projects_createdBy', onDelete: 'SET NULL' })
   createdById: string | null;
-
-  @ManyToOne(() => UserEntity, { nullable: true, onDelete: 'SET NULL' })
-  @JoinColumn({ name: 'createdById', foreignKeyConstraintName: 'FK_projects_createdBy' })
-  createdBy: Relation<UserEntity> | null;
 
   @CreateDateColumn()
   createdAt: Date;

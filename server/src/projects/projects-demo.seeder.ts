@@ -3,7 +3,7 @@ import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
 import { DEMO_ACCOUNTS } from '../seed/demo-accounts.js';
 import type { DemoSeeder } from '../seed/demo-seeder.js';
-import { UserEntity } from '../users/user.entity.js';
+import { UsersService } from '../users/users.service.js';
 import { ProjectMemberEntity } from './project-member.entity.js';
 import { ProjectEntity } from './project.entity.js';
 
@@ -26,12 +26,13 @@ const WRENMOSS_MEMBERS: ReadonlyArray<{ email: string; role: ProjectRole }> = [
 export class ProjectsDemoSeeder implements DemoSeeder {
   readonly order = 20;
 
+  constructor(private readonly users: UsersService) {}
+
   async seed(manager: EntityManager): Promise<void> {
-    const users = manager.getRepository(UserEntity);
-    const designer = await users.findOneByOrFail({ email: DEMO_ACCOUNTS.designer.email });
+    const designer = (await this.users.findByEmail(DEMO_ACCOUNTS.designer.email, manager))!;
     const project = await manager.getRepository(ProjectEntity).save(manager.create(ProjectEntity, { ...WRENMOSS_PROJECT, createdById: designer.id }));
     for (const member of WRENMOSS_MEMBERS) {
-      const user = await users.findOneByOrFail({ email: member.email });
+      const user = (await this.users.findByEmail(member.email, manager))!;
       await manager.getRepository(ProjectMemberEntity).insert({ projectId: project.id, userId: user.id, role: member.role });
     }
   }

@@ -9,10 +9,10 @@ import {
 } from '@channelwright/shared/schemas';
 import { Body, Controller, Get, Patch, Post } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
-import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
+import { CurrentUser } from '../common/auth/current-user.decorator.js';
 import { ApiZodBody, ApiZodResponse } from '../common/openapi/api-zod.decorators.js';
 import { ZodValidationPipe } from '../common/validation/zod-validation.pipe.js';
-import type { UserEntity } from '../users/user.entity.js';
+import type { Account } from '../users/users.service.js';
 import { CurrentProjectAccess, ProjectAccess, type ProjectAccessContext } from './project-access.guard.js';
 import { ProjectsService } from './projects.service.js';
 
@@ -25,14 +25,14 @@ export class ProjectsController {
 
   @Get()
   @ApiZodResponse(200, projectListSchema)
-  list(@CurrentUser() user: UserEntity): Promise<Project[]> {
+  list(@CurrentUser() user: Account): Promise<Project[]> {
     return this.projects.list(user);
   }
 
   @Post()
   @ApiZodBody(createProjectRequestSchema)
   @ApiZodResponse(201, projectSchema, 'The new project; the caller is its owner')
-  create(@Body(new ZodValidationPipe(createProjectRequestSchema)) request: CreateProjectRequest, @CurrentUser() user: UserEntity): Promise<Project> {
+  create(@Body(new ZodValidationPipe(createProjectRequestSchema)) request: CreateProjectRequest, @CurrentUser() user: Account): Promise<Project> {
     return this.projects.create(request, user);
   }
 

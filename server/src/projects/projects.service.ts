@@ -1,37 +1,43 @@
 import type { CreateProjectRequest, Project, ProjectRole, UpdateProjectRequest } from '@channelwright/shared/schemas';
 import { Injectable } from '@nestjs/common';
-import { InjectDataSource } from '@nestjs/typeorm';
-import type { DataSource, EntityManager } from 'typeorm';
-import { runInTransaction } from '../database/run-in-transaction.js';
-import { SheetEntity } from '../sheets/sheet.entity.js';
-import type { UserEntity } from '../users/user.entity.js';
+import { ModuleRef } from '@nestjs/core';
+import { InjectRepository } from '@nestjs/typeorm';
+import { In, type EntityManager, type Repository } from 'typeorm';
+import { registeredUnder } from '../common/extension-points.js';
+import { UnitOfWork } from '../database/unit-of-work.js';
+import { UsersService } from '../users/users.service.js';
 import { projectNotFound, type ProjectAccess } from './project-access.service.js';
 import { ProjectMemberEntity } from './project-member.entity.js';
 import { toProject, type ProjectCounts } from './project-response.js';
+import { PROJECT_SHEET_COUNTS, type ProjectSheetCounts } from './project-sheet-counts.js';
 import { ProjectEntity } from './project.entity.js';
 import { assertVersion } from './stale-edit.js';
 
-/** Projects: a user's list, create (the creator becomes owner), read, rename. Callers check access. */
+/**
+ * Projects: a user's list, create (the creator becomes owner), read, rename. Callers check access. Also the
+ * read side other modules use: a user's projects, a project's name.
+ */
 @Injectable()
 export class ProjectsService {
-  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+  constructor(
+    @InjectRepository(ProjectEntity) private readonly projects: Repository<ProjectEntity>,
+    @InjectRepository(ProjectMemberEntity) private readonly members: Repository<ProjectMemberEntity>,
+    private readonly unitOfWork: UnitOfWork,
+    private readonly users: UsersService,
+    private readonly moduleRef: ModuleRef,
+  ) {}
 
   /** The projects the user is a member of; every project for admins. By name. */
-  async list(user: UserEntity): Promise<Project[]> {
-    const memberships = await this.dataSource.getRepository(ProjectMemberEntity).findBy({ userId: user.id });
+  async list(user: { id: string; role: string }): Promise<Project[]> {
+    const memberships = await this.members.findBy({ userId: user.id });
     const roles = new Map(memberships.map((m) => [m.projectId, m.role]));
-    const query = this.dataSource.getRepository(ProjectEntity).createQueryBuilder('project').leftJoinAndSelect('project.createdBy', 'createdBy').orderBy('project.name', 'ASC');
-    if (user.role !== 'admin') {
-      if (roles.size === 0) return [];
-      query.where('project.id IN (:...ids)', { ids: [...roles.keys()] });
-    }
-    const projects = await query.getMany();
-    const counts = await this.counts(this.dataSource.manager, projects.map((p) => p.id));
-    return projects.map((project) => toProject(project, roles.get(project.id) ?? null, counts.get(project.id)!));
+    if (user.role !== 'admin' && roles.size === 0) return [];
+    const projects = await this.projects.find({ where: user.role === 'admin' ? {} : { id: In([...roles.keys()]) }, order: { name: 'ASC' } });
+    return this.present(this.unitOfWork.manager, projects, (project) => roles.get(project.id) ?? null);
   }
 
-  async create(request: CreateProjectRequest, creator: UserEntity): Promise<Project> {
-    const id = await runInTransaction(this.dataSource, async (manager) => {
+  async create(request: CreateProjectRequest, creator: { id: string }): Promise<Project> {
+    const id = await this.unitOfWork.run(async (manager) => {
       const project = await manager.getRepository(ProjectEntity).save(manager.create(ProjectEntity, { ...request, createdById: creator.id }));
       await manager.getRepository(ProjectMemberEntity).insert({ projectId: project.id, userId: creator.id, role: 'owner' });
       return project.id;
@@ -39,16 +45,16 @@ export class ProjectsService {
     return this.get(id, 'owner');
   }
 
-  async get(id: string, myRole: ProjectRole | null, manager: EntityManager = this.dataSource.manager): Promise<Project> {
-    const project = await manager.getRepository(ProjectEntity).findOne({ where: { id }, relations: { createdBy: true } });
+  async get(id: string, myRole: ProjectRole | null, manager: EntityManager = this.unitOfWork.manager): Promise<Project> {
+    const project = await manager.getRepository(ProjectEntity).findOneBy({ id });
     if (!project) throw projectNotFound();
-    const counts = await this.counts(manager, [id]);
-    return toProject(project, myRole, counts.get(id)!);
+    const [shown] = await this.present(manager, [project], () => myRole);
+    return shown;
   }
 
   /** Name and description; 409 STALE_EDIT (nothing written) when `version` is not the stored one. */
   async update(access: ProjectAccess, request: UpdateProjectRequest): Promise<Project> {
-    await runInTransaction(this.dataSource, async (manager) => {
+    await this.unitOfWork.run(async (manager) => {
       const projects = manager.getRepository(ProjectEntity);
       const project = await projects.findOneBy({ id: access.projectId });
       if (!project) throw projectNotFound();
@@ -59,19 +65,45 @@ export class ProjectsService {
     return this.get(access.projectId, access.role);
   }
 
+  /** The ids of the projects the user is a member of. */
+  async projectIdsOf(userId: string, manager?: EntityManager): Promise<string[]> {
+    const rows = await (manager ? manager.getRepository(ProjectMemberEntity) : this.members).find({ select: { projectId: true }, where: { userId } });
+    return rows.map((row) => row.projectId);
+  }
+
+  /** Each project's name by id (missing ids are left out). */
+  async namesOf(ids: Iterable<string>, manager: EntityManager = this.unitOfWork.manager): Promise<Map<string, string>> {
+    const wanted = [...new Set(ids)];
+    if (wanted.length === 0) return new Map();
+    const rows = await manager.getRepository(ProjectEntity).find({ select: { id: true, name: true }, where: { id: In(wanted) } });
+    return new Map(rows.map((row) => [row.id, row.name]));
+  }
+
+  /** The id of the first project of this name, or null (for the demo seed). */
+  async idByName(name: string, manager: EntityManager = this.unitOfWork.manager): Promise<string | null> {
+    return (await manager.getRepository(ProjectEntity).findOneBy({ name }))?.id ?? null;
+  }
+
+  private async present(manager: EntityManager, projects: ProjectEntity[], roleOf: (project: ProjectEntity) => ProjectRole | null): Promise<Project[]> {
+    const counts = await this.counts(manager, projects.map((p) => p.id));
+    const creators = await this.users.cards(projects.map((p) => p.createdById), manager);
+    return projects.map((project) => toProject(project, roleOf(project), counts.get(project.id)!, project.createdById === null ? undefined : creators.get(project.createdById)));
+  }
+
   private async counts(manager: EntityManager, ids: string[]): Promise<Map<string, ProjectCounts>> {
     const counts = new Map(ids.map((id) => [id, { memberCount: 0, sheetCount: 0 }]));
     if (ids.length === 0) return counts;
-    for (const [entity, key] of [[ProjectMemberEntity, 'memberCount'], [SheetEntity, 'sheetCount']] as const) {
-      const rows: Array<{ projectId: string; count: number }> = await manager
-        .getRepository<{ projectId: string }>(entity)
-        .createQueryBuilder('row')
-        .select('row.projectId', 'projectId')
-        .addSelect('COUNT(*)', 'count')
-        .where('row.projectId IN (:...ids)', { ids })
-        .groupBy('row.projectId')
-        .getRawMany();
-      for (const row of rows) counts.get(row.projectId)![key] = Number(row.count);
+    const rows: Array<{ projectId: string; count: number }> = await manager
+      .getRepository(ProjectMemberEntity)
+      .createQueryBuilder('row')
+      .select('row.projectId', 'projectId')
+      .addSelect('COUNT(*)', 'count')
+      .where('row.projectId IN (:...ids)', { ids })
+      .groupBy('row.projectId')
+      .getRawMany();
+    for (const row of rows) counts.get(row.projectId)!.memberCount = Number(row.count);
+    for (const source of registeredUnder<ProjectSheetCounts>(this.moduleRef, PROJECT_SHEET_COUNTS)) {
+      for (const [projectId, count] of await source.countByProject(ids)) counts.get(projectId)!.sheetCount += count;
     }
     return counts;
   }

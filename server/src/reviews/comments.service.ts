@@ -1,15 +1,15 @@
 import type { CreateCommentRequest, RevisionComment } from '@channelwright/shared/schemas';
 import { Injectable } from '@nestjs/common';
-import { InjectDataSource } from '@nestjs/typeorm';
-import type { DataSource } from 'typeorm';
+import { InjectRepository } from '@nestjs/typeorm';
+import type { Repository } from 'typeorm';
 import { AuditService } from '../audit/audit.service.js';
 import { DomainError, forbidden } from '../common/errors/domain-error.js';
-import { runInTransaction } from '../database/run-in-transaction.js';
-import { toUserRef } from '../processes/process-response.js';
+import { UnitOfWork } from '../database/unit-of-work.js';
 import type { ProjectAccess } from '../projects/project-access.service.js';
 import { RevisionReader } from '../revisions/revision-reader.js';
 import { revisionLabel } from '../revisions/revision-response.js';
-import type { UserEntity } from '../users/user.entity.js';
+import { toUserRef } from '../users/user-ref.js';
+import { UsersService, type Account, type UserCard } from '../users/users.service.js';
 import { RevisionCommentEntity } from './revision-comment.entity.js';
 
 /** Project roles that may comment on a revision: the people who size and the people who review. */
@@ -19,22 +19,25 @@ const COMMENTING_ROLES = ['owner', 'designer', 'reviewer'] as const;
 @Injectable()
 export class CommentsService {
   constructor(
-    @InjectDataSource() private readonly dataSource: DataSource,
+    @InjectRepository(RevisionCommentEntity) private readonly comments: Repository<RevisionCommentEntity>,
+    private readonly unitOfWork: UnitOfWork,
+    private readonly users: UsersService,
     private readonly revisions: RevisionReader,
     private readonly audit: AuditService,
   ) {}
 
   async list(revisionId: string): Promise<RevisionComment[]> {
-    const rows = await this.dataSource.getRepository(RevisionCommentEntity).find({ where: { revisionId }, relations: { author: true }, order: { createdAt: 'ASC', id: 'ASC' } });
-    return rows.map(toComment);
+    const rows = await this.comments.find({ where: { revisionId }, order: { createdAt: 'ASC', id: 'ASC' } });
+    const authors = await this.users.cards(rows.map((row) => row.authorId));
+    return rows.map((row) => toComment(row, authors.get(row.authorId)));
   }
 
   /** 403 COMMENT_NOT_ALLOWED for viewers (and admins who are not members); 400 DEVICE_NOT_IN_REVISION for a foreign device. */
-  async add(revisionId: string, access: ProjectAccess, input: CreateCommentRequest, author: UserEntity): Promise<RevisionComment> {
+  async add(revisionId: string, access: ProjectAccess, input: CreateCommentRequest, author: Account): Promise<RevisionComment> {
     if (access.role === null || !(COMMENTING_ROLES as readonly string[]).includes(access.role)) {
       throw forbidden('COMMENT_NOT_ALLOWED', `Only project members who are ${COMMENTING_ROLES.join(', ')} may comment`);
     }
-    const id = await runInTransaction(this.dataSource, async (manager) => {
+    const id = await this.unitOfWork.run(async (manager) => {
       const { revision } = await this.revisions.load(revisionId, manager);
       let device: { deviceId: string; name: string } | undefined;
       if (input.deviceId !== undefined) {
@@ -57,17 +60,17 @@ export class CommentsService {
       });
       return comment.id;
     });
-    const stored = await this.dataSource.getRepository(RevisionCommentEntity).findOneOrFail({ where: { id }, relations: { author: true } });
-    return toComment(stored);
+    const stored = await this.comments.findOneByOrFail({ id });
+    return toComment(stored, { id: author.id, displayName: author.displayName, email: author.email });
   }
 }
 
-function toComment(row: RevisionCommentEntity): RevisionComment {
+function toComment(row: RevisionCommentEntity, author: UserCard | undefined): RevisionComment {
   return {
     id: row.id,
     revisionId: row.revisionId,
     device: row.deviceId === null ? null : { id: row.deviceId, name: row.deviceName ?? '' },
-    author: toUserRef(row.author),
+    author: toUserRef(author),
     body: row.body,
     createdAt: row.createdAt.toISOString(),
   };

@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
-import { InjectDataSource } from '@nestjs/typeorm';
-import type { DataSource } from 'typeorm';
+import { InjectRepository } from '@nestjs/typeorm';
+import type { Repository } from 'typeorm';
 import type { DomainError } from '../common/errors/domain-error.js';
 import type { ProjectResourceResolver } from '../projects/project-resource-resolver.js';
 import { reviewRequestNotFound } from './review-request-reader.js';
@@ -11,10 +11,10 @@ import { ReviewRequestEntity } from './review-request.entity.js';
 export class ReviewRequestProjectResolver implements ProjectResourceResolver {
   readonly kind = 'review-request';
 
-  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+  constructor(@InjectRepository(ReviewRequestEntity) private readonly requests: Repository<ReviewRequestEntity>) {}
 
   async projectIdOf(requestId: string): Promise<string | null> {
-    const request = await this.dataSource.getRepository(ReviewRequestEntity).findOne({ select: { id: true, projectId: true }, where: { id: requestId } });
+    const request = await this.requests.findOne({ select: { id: true, projectId: true }, where: { id: requestId } });
     return request?.projectId ?? null;
   }
 

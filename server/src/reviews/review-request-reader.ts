@@ -1,76 +1,77 @@
 import type { ReviewInboxQuery } from '@channelwright/shared/schemas';
 import { Injectable } from '@nestjs/common';
-import { InjectDataSource } from '@nestjs/typeorm';
-import type { DataSource, EntityManager } from 'typeorm';
+import { InjectRepository } from '@nestjs/typeorm';
+import { In, type EntityManager, type Repository } from 'typeorm';
 import { notFound, type DomainError } from '../common/errors/domain-error.js';
-import { ProjectMemberEntity } from '../projects/project-member.entity.js';
-import { ProjectEntity } from '../projects/project.entity.js';
+import { ProjectsService } from '../projects/projects.service.js';
+import type { ReviewFacts, RevisionReviewSource } from '../revisions/revision-reviews.js';
 import { RevisionReader } from '../revisions/revision-reader.js';
-import { SheetEntity } from '../sheets/sheet.entity.js';
-import type { UserEntity } from '../users/user.entity.js';
+import { SheetReader } from '../sheets/sheet-reader.js';
+import { UsersService, type Account } from '../users/users.service.js';
 import type { LoadedReviewRequest } from './review-request-response.js';
 import { ReviewRequestEntity } from './review-request.entity.js';
 
 export const reviewRequestNotFound = (): DomainError => notFound('REVIEW_REQUEST_NOT_FOUND', 'There is no review request with this id');
 
-/** Reads review requests with what their responses show. */
+/** Reads review requests with what their responses show; also tells the revisions their requests (REVISION_REVIEWS). */
 @Injectable()
-export class ReviewRequestReader {
+export class ReviewRequestReader implements RevisionReviewSource {
   constructor(
-    @InjectDataSource() private readonly dataSource: DataSource,
+    @InjectRepository(ReviewRequestEntity) private readonly requests: Repository<ReviewRequestEntity>,
     private readonly revisions: RevisionReader,
+    private readonly sheets: SheetReader,
+    private readonly projects: ProjectsService,
+    private readonly users: UsersService,
   ) {}
 
-  async load(id: string, manager: EntityManager = this.dataSource.manager): Promise<LoadedReviewRequest> {
-    const request = await manager.getRepository(ReviewRequestEntity).findOne({ where: { id }, relations: { project: true, requestedBy: true, reviewer: true } });
+  async load(id: string, manager: EntityManager = this.requests.manager): Promise<LoadedReviewRequest> {
+    const request = await manager.getRepository(ReviewRequestEntity).findOneBy({ id });
     if (!request) throw reviewRequestNotFound();
-    return this.complete(request, manager);
+    const [loaded] = await this.complete([request], manager);
+    return loaded;
   }
 
   /** Every request of one revision, oldest first. */
   async forRevision(revisionId: string): Promise<LoadedReviewRequest[]> {
-    const requests = await this.dataSource.getRepository(ReviewRequestEntity).find({ where: { revisionId }, relations: { project: true, requestedBy: true, reviewer: true }, order: { createdAt: 'ASC' } });
-    const loaded: LoadedReviewRequest[] = [];
-    for (const request of requests) loaded.push(await this.complete(request, this.dataSource.manager));
-    return loaded;
+    const requests = await this.requests.find({ where: { revisionId }, order: { createdAt: 'ASC' } });
+    return this.complete(requests, this.requests.manager);
   }
 
   /**
    * The caller's inbox: requests assigned to them, or that they made, newest first; only in projects
    * they still belong to (admins: all of theirs).
    */
-  async inbox(user: UserEntity, query: ReviewInboxQuery): Promise<LoadedReviewRequest[]> {
-    const builder = this.dataSource
-      .getRepository(ReviewRequestEntity)
-      .createQueryBuilder('request')
-      .leftJoinAndSelect('request.project', 'project')
-      .leftJoinAndSelect('request.requestedBy', 'requestedBy')
-      .leftJoinAndSelect('request.reviewer', 'reviewer')
-      .where(query.mine === 'assigned' ? 'request.reviewerId = :me' : 'request.requestedById = :me', { me: user.id });
-    if (query.state) builder.andWhere('request.state = :state', { state: query.state });
-    if (user.role !== 'admin') {
-      builder.andWhere(`EXISTS (SELECT 1 FROM ${quoted(this.dataSource, ProjectMemberEntity)} m WHERE m."projectId" = request."projectId" AND m."userId" = :me)`);
-    }
-    const requests = await builder.orderBy('request.createdAt', 'DESC').getMany();
-    const loaded: LoadedReviewRequest[] = [];
-    for (const request of requests) loaded.push(await this.complete(request, this.dataSource.manager));
-    return loaded;
+  async inbox(user: Account, query: ReviewInboxQuery): Promise<LoadedReviewRequest[]> {
+    const mine = query.mine === 'assigned' ? { reviewerId: user.id } : { requestedById: user.id };
+    const projectIds = user.role === 'admin' ? undefined : await this.projects.projectIdsOf(user.id);
+    if (projectIds?.length === 0) return [];
+    const requests = await this.requests.find({
+      where: { ...mine, ...(query.state && { state: query.state }), ...(projectIds && { projectId: In(projectIds) }) },
+      order: { createdAt: 'DESC' },
+    });
+    return this.complete(requests, this.requests.manager);
   }
 
   /** The project's and the sheet's names, for mails and summaries. */
   async facts(manager: EntityManager, projectId: string, sheetId: string): Promise<{ projectName: string; sheetName: string }> {
-    const project = await manager.getRepository(ProjectEntity).findOneByOrFail({ id: projectId });
-    const sheet = await manager.getRepository(SheetEntity).findOneByOrFail({ id: sheetId });
-    return { projectName: project.name, sheetName: sheet.name };
+    const projectName = (await this.projects.namesOf([projectId], manager)).get(projectId) ?? '';
+    return { projectName, sheetName: (await this.sheets.nameOf(sheetId, manager)) ?? '' };
   }
 
-  private async complete(request: ReviewRequestEntity, manager: EntityManager): Promise<LoadedReviewRequest> {
-    const revision = await this.revisions.load(request.revisionId, manager);
-    const sheet = await manager.getRepository(SheetEntity).findOne({ select: { id: true, name: true }, where: { id: revision.revision.sheetId } });
-    return { request, revision, sheetName: sheet?.name ?? JSON.parse(revision.revision.sheetSnapshot).name };
+  async requestsOf(revisionIds: readonly string[], manager: EntityManager): Promise<ReviewFacts[]> {
+    if (revisionIds.length === 0) return [];
+    return manager.getRepository(ReviewRequestEntity).find({ where: { revisionId: In([...revisionIds]) }, order: { createdAt: 'ASC' } });
   }
-}
 
-function quoted(dataSource: DataSource, entity: typeof ProjectMemberEntity): string {
-  return `"${dataSource.getMetadata(entity).tableName}"`;
+  private async complete(requests: ReviewRequestEntity[], manager: EntityManager): Promise<LoadedReviewRequest[]> {
+    const projectNames = await this.projects.namesOf(requests.map((r) => r.projectId), manager);
+    const users = await this.users.cards(requests.flatMap((r) => [r.requestedById, r.reviewerId]), manager);
+    const loaded: LoadedReviewRequest[] = [];
+    for (const request of requests) {
+      const revision = await this.revisions.load(request.revisionId, manager);
+      const sheetName = (await this.sheets.nameOf(revision.revision.sheetId, manager)) ?? JSON.parse(revision.revision.sheetSnapshot).name;
+      loaded.push({ request, revision, sheetName, projectName: projectNames.get(request.projectId) ?? '', users });
+    }
+    return loaded;
+  }
 }

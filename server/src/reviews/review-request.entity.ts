@@ -1,8 +1,5 @@
 import { REVIEW_REQUEST_STATES, type ReviewRequestState } from '@channelwright/shared/schemas';
-import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
-import { ProjectEntity } from '../projects/project.entity.js';
-import { RevisionEntity } from '../revisions/revision.entity.js';
-import { UserEntity } from '../users/user.entity.js';
+import { Column, Entity, ForeignKey, Index, PrimaryGeneratedColumn } from 'typeorm';
 
 /**
  * A request that one reviewer review one revision. Written `open`; changed exactly once, to approved,
@@ -13,36 +10,25 @@ import { UserEntity } from '../users/user.entity.js';
 @Index('IDX_review_requests_reviewer', ['reviewerId', 'state'])
 @Index('IDX_review_requests_requester', ['requestedById', 'state'])
 export class ReviewRequestEntity {
+  // Foreign keys to other modules' tables are declared by table name; their rows are read through those modules' services.
   @PrimaryGeneratedColumn('uuid')
   id: string;
 
   @Column({ type: 'varchar' })
+  @ForeignKey('revisions', { name: 'FK_review_requests_revision', onDelete: 'RESTRICT' })
   revisionId: string;
 
-  @ManyToOne(() => RevisionEntity, { nullable: false, onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'revisionId', foreignKeyConstraintName: 'FK_review_requests_revision' })
-  revision: Relation<RevisionEntity>;
-
   @Column({ type: 'varchar' })
+  @ForeignKey('projects', { name: 'FK_review_requests_project', onDelete: 'RESTRICT' })
   projectId: string;
 
-  @ManyToOne(() => ProjectEntity, { nullable: false, onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'projectId', foreignKeyConstraintName: 'FK_review_requests_project' })
-  project: Relation<ProjectEntity>;
-
   @Column({ type: 'varchar' })
+  @ForeignKey('users', { name: 'FK_review_requests_requestedBy', onDelete: 'RESTRICT' })
   requestedById: string;
 
-  @ManyToOne(() => UserEntity, { nullable: false, onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'requestedById', foreignKeyConstraintName: 'FK_review_requests_requestedBy' })
-  requestedBy: Relation<UserEntity>;
-
   @Column({ type: 'varchar' })
+  @ForeignKey('users', { name: 'FK_review_requests_reviewer', onDelete: 'RESTRICT' })
   reviewerId: string;
-
-  @ManyToOne(() => UserEntity, { nullable: false, onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'reviewerId', foreignKeyConstraintName: 'FK_review_requests_reviewer' })
-  reviewer: Relation<UserEntity>;
 
   @Column({ type: 'text', default: '' })
   note: string;

@@ -11,11 +11,11 @@ import {
 } from '@channelwright/shared/schemas';
 import { Body, Controller, Get, HttpCode, Post, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
-import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
+import { CurrentUser } from '../common/auth/current-user.decorator.js';
 import { ApiZodBody, ApiZodResponse } from '../common/openapi/api-zod.decorators.js';
 import { ZodValidationPipe } from '../common/validation/zod-validation.pipe.js';
 import { CurrentProjectAccess, ProjectAccess, type ProjectAccessContext } from '../projects/project-access.guard.js';
-import type { UserEntity } from '../users/user.entity.js';
+import type { Account } from '../users/users.service.js';
 import { ReviewsService } from './reviews.service.js';
 
 /** Review requests: designers and owners ask; the assigned reviewer decides; the requester may withdraw. */
@@ -32,7 +32,7 @@ export class ReviewRequestsController {
   request(
     @CurrentProjectAccess() access: ProjectAccessContext,
     @Body(new ZodValidationPipe(createReviewRequestSchema)) input: CreateReviewRequest,
-    @CurrentUser() user: UserEntity,
+    @CurrentUser() user: Account,
   ): Promise<ReviewRequest> {
     return this.reviews.request(access.resourceId, input, user);
   }
@@ -46,7 +46,7 @@ export class ReviewRequestsController {
 
   @Get('review-requests')
   @ApiZodResponse(200, reviewRequestListSchema, 'The caller\'s inbox: ?mine=assigned (to review) or authored (asked by the caller)')
-  inbox(@CurrentUser() user: UserEntity, @Query(new ZodValidationPipe(reviewInboxQuerySchema)) query: ReviewInboxQuery): Promise<ReviewRequest[]> {
+  inbox(@CurrentUser() user: Account, @Query(new ZodValidationPipe(reviewInboxQuerySchema)) query: ReviewInboxQuery): Promise<ReviewRequest[]> {
     return this.reviews.inbox(user, query);
   }
 
@@ -65,7 +65,7 @@ export class ReviewRequestsController {
   decide(
     @CurrentProjectAccess() access: ProjectAccessContext,
     @Body(new ZodValidationPipe(decideReviewRequestSchema)) input: DecideReviewRequest,
-    @CurrentUser() user: UserEntity,
+    @CurrentUser() user: Account,
   ): Promise<ReviewRequest> {
     return this.reviews.decide(access.resourceId, input, user);
   }
@@ -74,7 +74,7 @@ export class ReviewRequestsController {
   @HttpCode(200)
   @ProjectAccess('read', 'review-request')
   @ApiZodResponse(200, reviewRequestSchema, 'Only the requester (403 NOT_REQUEST_AUTHOR); 409 once decided or withdrawn')
-  withdraw(@CurrentProjectAccess() access: ProjectAccessContext, @CurrentUser() user: UserEntity): Promise<ReviewRequest> {
+  withdraw(@CurrentProjectAccess() access: ProjectAccessContext, @CurrentUser() user: Account): Promise<ReviewRequest> {
     return this.reviews.withdraw(access.resourceId, user);
   }
 }

@@ -1,18 +1,16 @@
 import { REVIEWING_PROJECT_ROLES, type CreateReviewRequest, type DecideReviewRequest, type ReviewRequest } from '@channelwright/shared/schemas';
 import { Injectable } from '@nestjs/common';
-import { InjectDataSource } from '@nestjs/typeorm';
-import type { DataSource, EntityManager } from 'typeorm';
+import type { EntityManager } from 'typeorm';
 import { AuditService } from '../audit/audit.service.js';
 import { conflict, DomainError, forbidden } from '../common/errors/domain-error.js';
-import { runInTransaction } from '../database/run-in-transaction.js';
+import { UnitOfWork } from '../database/unit-of-work.js';
 import { MailService } from '../mail/mail.service.js';
 import { ProjectAccessService } from '../projects/project-access.service.js';
 import { revisionHash } from '../revisions/revision-content.js';
 import { RevisionReader } from '../revisions/revision-reader.js';
 import { revisionLabel, type LoadedRevision } from '../revisions/revision-response.js';
 import { revisionStateOf } from '../revisions/revision-state.js';
-import { RevisionEntity } from '../revisions/revision.entity.js';
-import { UserEntity } from '../users/user.entity.js';
+import { UsersService, type Account } from '../users/users.service.js';
 import { decisionNotice, reviewRequestedNotice, withdrawnNotice, type ReviewFacts } from './review-notices.js';
 import { ReviewRequestReader } from './review-request-reader.js';
 import { toReviewRequest } from './review-request-response.js';
@@ -25,7 +23,8 @@ import { ReviewRequestEntity } from './review-request.entity.js';
 @Injectable()
 export class ReviewsService {
   constructor(
-    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly unitOfWork: UnitOfWork,
+    private readonly users: UsersService,
     private readonly revisions: RevisionReader,
     private readonly requests: ReviewRequestReader,
     private readonly access: ProjectAccessService,
@@ -34,8 +33,8 @@ export class ReviewsService {
   ) {}
 
   /** Asks a reviewer (a member with the reviewer or owner role, not the author) to review a revision. */
-  async request(revisionId: string, input: CreateReviewRequest, requester: UserEntity): Promise<ReviewRequest> {
-    const id = await runInTransaction(this.dataSource, async (manager) => {
+  async request(revisionId: string, input: CreateReviewRequest, requester: Account): Promise<ReviewRequest> {
+    const id = await this.unitOfWork.run(async (manager) => {
       const revision = await this.revisions.load(revisionId, manager);
       await this.assertReviewable(manager, revision);
       const reviewer = await this.eligibleReviewer(manager, revision, input, requester);
@@ -60,8 +59,8 @@ export class ReviewsService {
   }
 
   /** The requester takes an open request back; 409 once it is decided or withdrawn. */
-  async withdraw(requestId: string, user: UserEntity): Promise<ReviewRequest> {
-    await runInTransaction(this.dataSource, async (manager) => {
+  async withdraw(requestId: string, user: Account): Promise<ReviewRequest> {
+    await this.unitOfWork.run(async (manager) => {
       const { request, revision } = await this.requests.load(requestId, manager);
       if (request.requestedById !== user.id) throw forbidden('NOT_REQUEST_AUTHOR', 'Only the person who asked for this review may withdraw it');
       assertOpen(request);
@@ -77,7 +76,8 @@ export class ReviewsService {
         after: { state: 'withdrawn' },
         summary: `Withdrew the review request for ${facts.sheetName} ${facts.label}`,
       });
-      await this.mail.notify(withdrawnNotice(request.reviewer.email, user.displayName, facts), manager);
+      const reviewer = (await this.users.cards([request.reviewerId], manager)).get(request.reviewerId);
+      if (reviewer) await this.mail.notify(withdrawnNotice(reviewer.email, user.displayName, facts), manager);
     });
     return this.get(requestId);
   }
@@ -87,8 +87,8 @@ export class ReviewsService {
    * that hash; request-changes sends it back. Mail goes to the requester and, when another person,
    * the revision's author.
    */
-  async decide(requestId: string, input: DecideReviewRequest, reviewer: UserEntity): Promise<ReviewRequest> {
-    await runInTransaction(this.dataSource, async (manager) => {
+  async decide(requestId: string, input: DecideReviewRequest, reviewer: Account): Promise<ReviewRequest> {
+    await this.unitOfWork.run(async (manager) => {
       const { request, revision } = await this.requests.load(requestId, manager);
       if (request.reviewerId !== reviewer.id) throw forbidden('NOT_ASSIGNED_REVIEWER', 'Only the reviewer this request is assigned to may decide it');
       assertOpen(request);
@@ -118,7 +118,8 @@ export class ReviewsService {
         after: { state, comment: input.comment, revisionId: revision.revision.id, revision: facts.label, ...(signedHash && { signedHash }) },
         summary: approved ? `Signed off ${facts.sheetName} ${facts.label}` : `Requested changes to ${facts.sheetName} ${facts.label}`,
       });
-      const recipients = new Set([request.requestedBy.email, revision.revision.author.email]);
+      const people = await this.users.cards([request.requestedById, revision.revision.authorId], manager);
+      const recipients = new Set([...people.values()].map((person) => person.email));
       for (const to of recipients) await this.mail.notify(decisionNotice(to, reviewer.displayName, facts, approved, input.comment), manager);
     });
     return this.get(requestId);
@@ -132,7 +133,7 @@ export class ReviewsService {
     return (await this.requests.forRevision(revisionId)).map(toReviewRequest);
   }
 
-  async inbox(user: UserEntity, query: Parameters<ReviewRequestReader['inbox']>[1]): Promise<ReviewRequest[]> {
+  async inbox(user: Account, query: Parameters<ReviewRequestReader['inbox']>[1]): Promise<ReviewRequest[]> {
     return (await this.requests.inbox(user, query)).map(toReviewRequest);
   }
 
@@ -143,14 +144,13 @@ export class ReviewsService {
     if (state === 'signed-off') throw conflict('REVISION_SIGNED_OFF', `${label} is already signed off`);
     if (state === 'in-review') throw conflict('REVIEW_ALREADY_OPEN', `${label} is already in review; withdraw that request first`);
     if (state === 'changes-requested') throw conflict('REVISION_CHANGES_REQUESTED', `Changes were requested on ${label}: edit the sheet and freeze a new revision`);
-    const newest = await manager.getRepository(RevisionEntity).maximum('number', { sheetId: revision.sheetId });
+    const newest = await this.revisions.newestNumber(revision.sheetId, manager);
     if (newest !== null && newest > revision.number) throw conflict('REVISION_SUPERSEDED', `${label} has been superseded by ${revisionLabel(newest)}: ask for a review of that one`);
   }
 
-  private async eligibleReviewer(manager: EntityManager, { revision }: LoadedRevision, input: CreateReviewRequest, requester: UserEntity): Promise<UserEntity> {
+  private async eligibleReviewer(manager: EntityManager, { revision }: LoadedRevision, input: CreateReviewRequest, requester: Account): Promise<Account> {
     const field = input.reviewerId !== undefined ? 'reviewerId' : 'reviewerEmail';
-    const users = manager.getRepository(UserEntity);
-    const reviewer = input.reviewerId !== undefined ? await users.findOneBy({ id: input.reviewerId }) : await users.findOneBy({ email: input.reviewerEmail! });
+    const reviewer = input.reviewerId !== undefined ? await this.users.findById(input.reviewerId, manager) : await this.users.findByEmail(input.reviewerEmail!, manager);
     if (reviewer && (reviewer.id === revision.authorId || reviewer.id === requester.id)) {
       throw new DomainError('SELF_REVIEW', 'A revision is reviewed by someone other than its author (separation of duties)', 403, field);
     }

@@ -1,6 +1,4 @@
-import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
-import { RevisionEntity } from '../revisions/revision.entity.js';
-import { UserEntity } from '../users/user.entity.js';
+import { Column, Entity, ForeignKey, Index, PrimaryGeneratedColumn } from 'typeorm';
 
 /** A comment on a revision, or on one of its devices. Part of the record: triggers refuse UPDATE and DELETE. */
 @Entity('revision_comments')
@@ -10,11 +8,8 @@ export class RevisionCommentEntity {
   id: string;
 
   @Column({ type: 'varchar' })
+  @ForeignKey('revisions', { name: 'FK_revision_comments_revision', onDelete: 'RESTRICT' })
   revisionId: string;
-
-  @ManyToOne(() => RevisionEntity, { nullable: false, onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'revisionId', foreignKeyConstraintName: 'FK_revision_comments_revision' })
-  revision: Relation<RevisionEntity>;
 
   /** The sheet device id of a device of the revision; null for the whole revision. */
   @Column({ type: 'varchar', nullable: true })
@@ -25,11 +20,8 @@ export class RevisionCommentEntity {
   deviceName: string | null;
 
   @Column({ type: 'varchar' })
+  @ForeignKey('users', { name: 'FK_revision_comments_author', onDelete: 'RESTRICT' })
   authorId: string;
-
-  @ManyToOne(() => UserEntity, { nullable: false, onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'authorId', foreignKeyConstraintName: 'FK_revision_comments_author' })
-  author: Relation<UserEntity>;
 
   @Column({ type: 'text' })
   body: string;

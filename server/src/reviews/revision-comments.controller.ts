@@ -2,11 +2,11 @@ import { createCommentRequestSchema, revisionCommentSchema, type CreateCommentRe
 import { Body, Controller, Get, Post } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { z } from 'zod';
-import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
+import { CurrentUser } from '../common/auth/current-user.decorator.js';
 import { ApiZodBody, ApiZodResponse } from '../common/openapi/api-zod.decorators.js';
 import { ZodValidationPipe } from '../common/validation/zod-validation.pipe.js';
 import { CurrentProjectAccess, ProjectAccess, type ProjectAccessContext } from '../projects/project-access.guard.js';
-import type { UserEntity } from '../users/user.entity.js';
+import type { Account } from '../users/users.service.js';
 import { CommentsService } from './comments.service.js';
 
 /** Comments on a revision or one of its devices: members read; owners, designers and reviewers write. */
@@ -30,7 +30,7 @@ export class RevisionCommentsController {
   add(
     @CurrentProjectAccess() access: ProjectAccessContext,
     @Body(new ZodValidationPipe(createCommentRequestSchema)) input: CreateCommentRequest,
-    @CurrentUser() user: UserEntity,
+    @CurrentUser() user: Account,
   ): Promise<RevisionComment> {
     return this.comments.add(access.resourceId, access, input, user);
   }

@@ -1,5 +1,7 @@
-import { createHash } from 'node:crypto';
 import { canonicalJson } from './canonical-json.js';
+import { revisionHash } from './revision-content.js';
+import type { RevisionDeviceEntity } from './revision-device.entity.js';
+import type { RevisionEntity } from './revision.entity.js';
 
 describe('canonicalJson (RFC 8785, 2020)', () => {
   it('sorts members by name and writes no whitespace, at every depth', () => {
@@ -40,9 +42,42 @@ describe('canonicalJson (RFC 8785, 2020)', () => {
   });
 });
 
-describe('SHA-256 as the revisions use it (node:crypto)', () => {
-  it('gives the FIPS 180-4 (2015) example digest of "abc"', () => {
-    // NIST's SHA-256 example computation for the message "abc" (the examples that accompany FIPS 180-4).
-    expect(createHash('sha256').update('abc', 'utf8').digest('hex')).toBe('ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad');
+describe('revisionHash over the canonical JSON of a revision', () => {
+  const revision = {
+    id: 'rev-1',
+    sheetId: 'sheet-1',
+    projectId: 'project-1',
+    number: 2,
+    message: 'Bias generator for review',
+    authorId: 'user-1',
+    createdAt: new Date('2026-03-02T10:15:00.000Z'),
+    sheetSnapshot: '{"name":"Bias generator","description":"","temperature":27,"corner":"TT","model":"all-region"}',
+    processVersionId: 'pv-1',
+    processProfileId: 'pp-1',
+    processName: 'BF180-G',
+    processVersionNumber: 1,
+    engineVersion: '1.0.0',
+    hash: '',
+  } as RevisionEntity;
+  const device = (position: number, targets: string, result: string | null = '{"w":1.2e-5,"corners":[[1,2],[3,4]]}') =>
+    ({ id: `row-${position}`, revisionId: 'rev-1', deviceId: `dev-${position}`, position, name: `M${position}`, targets, result, error: null, engineVersion: '1.0.0', processVersionId: 'pv-1', computedAt: '2026-03-02T10:14:00.000Z' }) as RevisionDeviceEntity;
+  const devices = [device(0, '{"name":"M0","id":2e-5,"l":5e-7,"note":"µ-power"}'), device(1, '{"name":"M1","id":1e-6,"l":1e-6}')];
+  const hash = revisionHash(revision, devices);
+
+  it('is 64 hex digits of SHA-256 and the same however the stored JSON orders, spells or escapes the same values', () => {
+    expect(hash).toMatch(/^[0-9a-f]{64}$/);
+    const respelled = [
+      device(1, '{"l":0.000001,"id":1E-6,"name":"M1"}'),
+      device(0, '{"note":"\\u00b5-power","l":0.0000005,"id":0.00002,"name":"M0"}', '{"corners":[[1.0,2],[3,4.00]],"w":0.000012}'),
+    ];
+    expect(revisionHash(revision, respelled)).toBe(hash);
+  });
+
+  it('changes when any value changes, including one deep in a nested array', () => {
+    expect(revisionHash(revision, [device(0, '{"name":"M0","id":2.1e-5,"l":5e-7,"note":"µ-power"}'), devices[1]])).not.toBe(hash);
+    expect(revisionHash(revision, [device(0, devices[0].targets, '{"w":1.2e-5,"corners":[[1,2],[4,3]]}'), devices[1]])).not.toBe(hash);
+    expect(revisionHash({ ...revision, message: 'Bias generator for review.' } as RevisionEntity, devices)).not.toBe(hash);
+    expect(revisionHash(revision, [devices[0], { ...devices[1], position: 2 } as RevisionDeviceEntity])).not.toBe(hash);
+    expect(revisionHash(revision, [devices[0]])).not.toBe(hash);
   });
 });

@@ -1,5 +1,4 @@
-import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
-import { ProcessVersionEntity } from '../processes/process-version.entity.js';
+import { Column, Entity, ForeignKey, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
 import { RevisionEntity } from './revision.entity.js';
 
 /**
@@ -44,12 +43,10 @@ export class RevisionDeviceEntity {
   @Column({ type: 'varchar', length: 50 })
   engineVersion: string;
 
+  /** A process version (the processes module's table). */
   @Column({ type: 'varchar' })
+  @ForeignKey('process_versions', { name: 'FK_revision_devices_processVersion', onDelete: 'RESTRICT' })
   processVersionId: string;
-
-  @ManyToOne(() => ProcessVersionEntity, { nullable: false, onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'processVersionId', foreignKeyConstraintName: 'FK_revision_devices_processVersion' })
-  processVersion: Relation<ProcessVersionEntity>;
 
   /** ISO 8601 text, kept as text so the hashed value is exactly the stored one. */
   @Column({ type: 'varchar', length: 30 })

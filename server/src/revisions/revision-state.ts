@@ -1,7 +1,7 @@
 import type { RevisionState } from '@channelwright/shared/schemas';
-import type { ReviewRequestEntity } from '../reviews/review-request.entity.js';
+import type { ReviewFacts } from './revision-reviews.js';
 
-type RequestFacts = Pick<ReviewRequestEntity, 'state' | 'createdAt' | 'decidedAt'>;
+type RequestFacts = Pick<ReviewFacts, 'state' | 'createdAt' | 'decidedAt'>;
 
 /**
  * A revision's state from its review requests: signed off once one is approved (final); in review

@@ -1,8 +1,4 @@
-import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryColumn, type Relation } from 'typeorm';
-import { ProcessVersionEntity } from '../processes/process-version.entity.js';
-import { ProjectEntity } from '../projects/project.entity.js';
-import { SheetEntity } from '../sheets/sheet.entity.js';
-import { UserEntity } from '../users/user.entity.js';
+import { Column, Entity, ForeignKey, Index, PrimaryColumn } from 'typeorm';
 
 /**
  * A frozen sheet: r1, r2 … per sheet. Every column is part of the snapshot and of its hash, so a
@@ -17,19 +13,14 @@ export class RevisionEntity {
   @PrimaryColumn({ type: 'varchar' })
   id: string;
 
+  // Foreign keys to other modules' tables are declared by table name; their rows are read through those modules' services.
   @Column({ type: 'varchar' })
+  @ForeignKey('sheets', { name: 'FK_revisions_sheet', onDelete: 'RESTRICT' })
   sheetId: string;
 
-  @ManyToOne(() => SheetEntity, { nullable: false, onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'sheetId', foreignKeyConstraintName: 'FK_revisions_sheet' })
-  sheet: Relation<SheetEntity>;
-
   @Column({ type: 'varchar' })
+  @ForeignKey('projects', { name: 'FK_revisions_project', onDelete: 'RESTRICT' })
   projectId: string;
-
-  @ManyToOne(() => ProjectEntity, { nullable: false, onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'projectId', foreignKeyConstraintName: 'FK_revisions_project' })
-  project: Relation<ProjectEntity>;
 
   /** 1, 2, 3 … per sheet. */
   @Column({ type: 'integer' })
@@ -39,11 +30,8 @@ export class RevisionEntity {
   message: string;
 
   @Column({ type: 'varchar' })
+  @ForeignKey('users', { name: 'FK_revisions_author', onDelete: 'RESTRICT' })
   authorId: string;
-
-  @ManyToOne(() => UserEntity, { nullable: false, onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'authorId', foreignKeyConstraintName: 'FK_revisions_author' })
-  author: Relation<UserEntity>;
 
   /** Set by the service (to the millisecond), because the hash covers it. */
   @Column({ type: 'datetime' })
@@ -54,11 +42,8 @@ export class RevisionEntity {
   sheetSnapshot: string;
 
   @Column({ type: 'varchar' })
+  @ForeignKey('process_versions', { name: 'FK_revisions_processVersion', onDelete: 'RESTRICT' })
   processVersionId: string;
-
-  @ManyToOne(() => ProcessVersionEntity, { nullable: false, onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'processVersionId', foreignKeyConstraintName: 'FK_revisions_processVersion' })
-  processVersion: Relation<ProcessVersionEntity>;
 
   @Column({ type: 'varchar' })
   processProfileId: string;

@@ -15,11 +15,11 @@ import {
 } from '@channelwright/shared/schemas';
 import { Body, Controller, Delete, Get, Param, Patch, Post, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
-import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
+import { CurrentUser } from '../common/auth/current-user.decorator.js';
 import { ApiZodBody, ApiZodResponse } from '../common/openapi/api-zod.decorators.js';
 import { ZodValidationPipe } from '../common/validation/zod-validation.pipe.js';
 import { CurrentProjectAccess, ProjectAccess, type ProjectAccessContext } from '../projects/project-access.guard.js';
-import type { UserEntity } from '../users/user.entity.js';
+import type { Account } from '../users/users.service.js';
 import { RevisionsService } from './revisions.service.js';
 
 /** Revisions of a sheet: designers and owners freeze; every member reads, verifies and compares. */
@@ -36,7 +36,7 @@ export class RevisionsController {
   freeze(
     @CurrentProjectAccess() access: ProjectAccessContext,
     @Body(new ZodValidationPipe(createRevisionRequestSchema)) request: CreateRevisionRequest,
-    @CurrentUser() user: UserEntity,
+    @CurrentUser() user: Account,
   ): Promise<Revision> {
     return this.revisions.freeze(access.resourceId, request.message, user);
   }

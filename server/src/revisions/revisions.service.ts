@@ -1,13 +1,11 @@
 import type { Revision, RevisionDiff, RevisionSummary, RevisionVerification } from '@channelwright/shared/schemas';
 import { REVISION_HASH_ALGORITHM } from '@channelwright/shared/schemas';
 import { Injectable } from '@nestjs/common';
-import { InjectDataSource } from '@nestjs/typeorm';
-import type { DataSource } from 'typeorm';
 import { AuditService } from '../audit/audit.service.js';
 import { badRequest, conflict, notFound } from '../common/errors/domain-error.js';
-import { runInTransaction } from '../database/run-in-transaction.js';
+import { UnitOfWork } from '../database/unit-of-work.js';
 import { SheetReader } from '../sheets/sheet-reader.js';
-import type { UserEntity } from '../users/user.entity.js';
+import type { Account } from '../users/users.service.js';
 import { deviceContentOf, revisionHash, sheetSnapshotOf } from './revision-content.js';
 import { diffRevisions, type DiffSide } from './revision-diff.js';
 import { freezeSheet } from './revision-freeze.js';
@@ -19,14 +17,14 @@ import { revisionStateOf } from './revision-state.js';
 @Injectable()
 export class RevisionsService {
   constructor(
-    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly unitOfWork: UnitOfWork,
     private readonly sheets: SheetReader,
     private readonly reader: RevisionReader,
     private readonly audit: AuditService,
   ) {}
 
-  async freeze(sheetId: string, message: string, author: UserEntity): Promise<Revision> {
-    const id = await runInTransaction(this.dataSource, async (manager) => {
+  async freeze(sheetId: string, message: string, author: Account): Promise<Revision> {
+    const id = await this.unitOfWork.run(async (manager) => {
       const loaded = await this.sheets.load(sheetId, manager);
       const revision = await freezeSheet(manager, loaded, message, author.id);
       const label = revisionLabel(revision.number);

@@ -11,6 +11,8 @@ export interface DemoAccount {
   displayName: string;
   role: GlobalRole;
   processMaintainer: boolean;
+  /** Reads the whole process library (the viewer sees only what the demo project uses). */
+  libraryAccess: boolean;
   /** What this person does in the demo. */
   job: string;
 }
@@ -21,6 +23,7 @@ export const DEMO_ACCOUNTS = {
     displayName: 'Brackenfold Admin',
     role: 'admin',
     processMaintainer: true,
+    libraryAccess: true,
     job: 'administrator: users and process profiles',
   },
   designer: {
@@ -28,6 +31,7 @@ export const DEMO_ACCOUNTS = {
     displayName: 'Brackenfold Designer',
     role: 'member',
     processMaintainer: false,
+    libraryAccess: true,
     job: 'analog designer: owns the demo project, sizes devices, requests reviews',
   },
   reviewer: {
@@ -35,6 +39,7 @@ export const DEMO_ACCOUNTS = {
     displayName: 'Brackenfold Reviewer',
     role: 'member',
     processMaintainer: false,
+    libraryAccess: true,
     job: 'senior designer: reviews and signs off',
   },
   viewer: {
@@ -42,6 +47,7 @@ export const DEMO_ACCOUNTS = {
     displayName: 'Brackenfold Viewer',
     role: 'member',
     processMaintainer: false,
+    libraryAccess: false,
     job: 'layout engineer: reads sheets, downloads exports',
   },
 } as const satisfies Record<string, DemoAccount>;

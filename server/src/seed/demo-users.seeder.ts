@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
 import { hashPassword } from '../auth/password-hasher.js';
-import { UserEntity } from '../users/user.entity.js';
+import { UsersService } from '../users/users.service.js';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from './demo-accounts.js';
 import type { DemoSeeder } from './demo-seeder.js';
 
@@ -10,13 +10,15 @@ import type { DemoSeeder } from './demo-seeder.js';
 export class DemoUsersSeeder implements DemoSeeder {
   readonly order = 0;
 
+  constructor(private readonly users: UsersService) {}
+
   async seed(manager: EntityManager): Promise<void> {
-    // They all share the one published password, so one hash serves (bcrypt costs ~0.25 s each).
+    // They all share the one published password, so one hash serves (scrypt costs ~0.7 s each).
     const passwordHash = await hashPassword(DEMO_PASSWORD);
-    const users = manager.getRepository(UserEntity);
     for (const account of Object.values(DEMO_ACCOUNTS)) {
-      const { job: _job, ...fields } = account;
-      await users.save(users.create({ ...fields, passwordHash }));
+      const { job: _job, role, processMaintainer, libraryAccess, ...fields } = account;
+      const user = await this.users.createAccount({ ...fields, passwordHash, emailConfirmed: true }, manager);
+      if (user.role !== role || processMaintainer || libraryAccess) await this.users.grant(user.id, { role, processMaintainer, libraryAccess }, manager);
     }
   }
 }

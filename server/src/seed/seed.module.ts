@@ -1,12 +1,12 @@
 import { Module } from '@nestjs/common';
-import { TypeOrmModule } from '@nestjs/typeorm';
-import { UserEntity } from '../users/user.entity.js';
+import { UsersModule } from '../users/users.module.js';
 import { DEMO_SEEDERS } from './demo-seeder.js';
 import { DemoUsersSeeder } from './demo-users.seeder.js';
 import { SeedService } from './seed.service.js';
 
+/** The invented demo data at start-up; the demo accounts come through UsersService, every feature seeds its own tables. */
 @Module({
-  imports: [TypeOrmModule.forFeature([UserEntity])],
+  imports: [UsersModule],
   providers: [SeedService, { provide: DEMO_SEEDERS, useClass: DemoUsersSeeder }],
 })
 export class SeedModule {}

@@ -1,10 +1,8 @@
 import { Injectable, Logger, type OnApplicationBootstrap } from '@nestjs/common';
 import { ModuleRef } from '@nestjs/core';
-import { InjectDataSource } from '@nestjs/typeorm';
-import type { DataSource } from 'typeorm';
 import { AppConfigService } from '../config/app-config.service.js';
-import { runInTransaction } from '../database/run-in-transaction.js';
-import { UserEntity } from '../users/user.entity.js';
+import { UnitOfWork } from '../database/unit-of-work.js';
+import { UsersService } from '../users/users.service.js';
 import { DEMO_SEEDERS, type DemoSeeder } from './demo-seeder.js';
 
 /** Seeds the invented demo data at start-up when SEED_DEMO is on and the database has no account yet. */
@@ -14,7 +12,8 @@ export class SeedService implements OnApplicationBootstrap {
 
   constructor(
     private readonly config: AppConfigService,
-    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly unitOfWork: UnitOfWork,
+    private readonly users: UsersService,
     private readonly moduleRef: ModuleRef,
   ) {}
 
@@ -27,8 +26,8 @@ export class SeedService implements OnApplicationBootstrap {
     const seeders = this.moduleRef
       .get<DemoSeeder>(DEMO_SEEDERS, { strict: false, each: true })
       .toSorted((a, b) => a.order - b.order);
-    return runInTransaction(this.dataSource, async (manager) => {
-      if ((await manager.count(UserEntity)) > 0) return false;
+    return this.unitOfWork.run(async (manager) => {
+      if (await this.users.hasAnyAccount(manager)) return false;
       for (const seeder of seeders) await seeder.seed(manager);
       return true;
     });

@@ -1,5 +1,4 @@
-import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn, type Relation } from 'typeorm';
-import { ProcessVersionEntity } from '../processes/process-version.entity.js';
+import { Column, CreateDateColumn, Entity, ForeignKey, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn, type Relation } from 'typeorm';
 import { SheetEntity } from './sheet.entity.js';
 
 /**
@@ -43,12 +42,10 @@ export class DeviceEntity {
   engineVersion: string;
 
   /** The process version the result was computed on. */
+  /** A process version (the processes module's table, read through ProcessesService). */
   @Column({ type: 'varchar' })
+  @ForeignKey('process_versions', { name: 'FK_devices_processVersion', onDelete: 'RESTRICT' })
   processVersionId: string;
-
-  @ManyToOne(() => ProcessVersionEntity, { nullable: false, onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'processVersionId', foreignKeyConstraintName: 'FK_devices_processVersion' })
-  processVersion: Relation<ProcessVersionEntity>;
 
   @Column({ type: 'datetime' })
   computedAt: Date;

@@ -1,11 +1,10 @@
 import type { Device, DeviceTargets, UpdateDeviceRequest } from '@channelwright/shared/schemas';
 import { Injectable } from '@nestjs/common';
-import { InjectDataSource } from '@nestjs/typeorm';
-import type { DataSource, EntityManager } from 'typeorm';
+import type { EntityManager } from 'typeorm';
 import { deviceAudit } from '../audit/sheet-audit.js';
 import { AuditService } from '../audit/audit.service.js';
 import { conflict, notFound } from '../common/errors/domain-error.js';
-import { runInTransaction } from '../database/run-in-transaction.js';
+import { UnitOfWork } from '../database/unit-of-work.js';
 import { assertVersion } from '../projects/stale-edit.js';
 import { assertKnownToProcess, computationColumns, computeDevice } from './device-computation.js';
 import { mergeTargets } from './device-targets.js';
@@ -23,7 +22,7 @@ const deviceNotFound = () => notFound('DEVICE_NOT_FOUND', 'This sheet has no dev
 @Injectable()
 export class DevicesService {
   constructor(
-    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly unitOfWork: UnitOfWork,
     private readonly reader: SheetReader,
     private readonly audit: AuditService,
   ) {}
@@ -35,7 +34,7 @@ export class DevicesService {
 
   /** 409 DEVICE_NAME_TAKEN when the sheet has a device of this name; 400 for a corner or flavour the process lacks. */
   create(sheetId: string, targets: DeviceTargets): Promise<Device> {
-    return runInTransaction(this.dataSource, async (manager) => {
+    return this.unitOfWork.run(async (manager) => {
       const loaded = await this.reader.load(sheetId, manager);
       assertNameFree(loaded, targets.name);
       const computation = computeDevice(targets, loaded.sheet, loaded.process);
@@ -50,7 +49,7 @@ export class DevicesService {
 
   /** The targets merged with the change, recomputed; 409 STALE_EDIT (nothing written) when `version` is not the stored one. */
   update(sheetId: string, deviceId: string, change: UpdateDeviceRequest): Promise<Device> {
-    return runInTransaction(this.dataSource, async (manager) => {
+    return this.unitOfWork.run(async (manager) => {
       const loaded = await this.reader.load(sheetId, manager);
       const device = loaded.devices.find((d) => d.id === deviceId);
       if (!device) throw deviceNotFound();
@@ -68,7 +67,7 @@ export class DevicesService {
 
   /** With `version`, 409 STALE_EDIT when it is not the stored one. */
   async remove(sheetId: string, deviceId: string, version: number | undefined): Promise<void> {
-    await runInTransaction(this.dataSource, async (manager) => {
+    await this.unitOfWork.run(async (manager) => {
       const device = await manager.getRepository(DeviceEntity).findOneBy({ id: deviceId, sheetId });
       if (!device) throw deviceNotFound();
       assertVersion('device', device, version);

@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
-import { InjectDataSource } from '@nestjs/typeorm';
-import type { DataSource } from 'typeorm';
+import { InjectRepository } from '@nestjs/typeorm';
+import type { Repository } from 'typeorm';
 import type { DomainError } from '../common/errors/domain-error.js';
 import type { ProjectResourceResolver } from '../projects/project-resource-resolver.js';
 import { sheetNotFound } from './sheet-reader.js';
@@ -11,10 +11,10 @@ import { SheetEntity } from './sheet.entity.js';
 export class SheetProjectResolver implements ProjectResourceResolver {
   readonly kind = 'sheet';
 
-  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+  constructor(@InjectRepository(SheetEntity) private readonly sheets: Repository<SheetEntity>) {}
 
   async projectIdOf(sheetId: string): Promise<string | null> {
-    const sheet = await this.dataSource.getRepository(SheetEntity).findOne({ select: { id: true, projectId: true }, where: { id: sheetId } });
+    const sheet = await this.sheets.findOne({ select: { id: true, projectId: true }, where: { id: sheetId } });
     return sheet?.projectId ?? null;
   }
 

@@ -1,7 +1,5 @@
 import { MODELS } from '@channelwright/shared/schemas';
-import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn, type Relation } from 'typeorm';
-import { ProcessVersionEntity } from '../processes/process-version.entity.js';
-import { ProjectEntity } from '../projects/project.entity.js';
+import { Column, CreateDateColumn, Entity, ForeignKey, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
 
 /** A sizing sheet: the devices of one circuit, on one process profile version, with their defaults. */
 @Entity('sheets')
@@ -10,12 +8,10 @@ export class SheetEntity {
   @PrimaryGeneratedColumn('uuid')
   id: string;
 
+  /** A project (the projects module's table, read through ProjectsService). */
   @Column({ type: 'varchar' })
+  @ForeignKey('projects', { name: 'FK_sheets_project', onDelete: 'RESTRICT' })
   projectId: string;
-
-  @ManyToOne(() => ProjectEntity, { nullable: false, onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'projectId', foreignKeyConstraintName: 'FK_sheets_project' })
-  project: Relation<ProjectEntity>;
 
   @Column({ type: 'varchar', length: 100 })
   name: string;
@@ -25,11 +21,8 @@ export class SheetEntity {
 
   /** The process version the devices are sized on; a stored result made on another one is stale. */
   @Column({ type: 'varchar' })
+  @ForeignKey('process_versions', { name: 'FK_sheets_processVersion', onDelete: 'RESTRICT' })
   processVersionId: string;
-
-  @ManyToOne(() => ProcessVersionEntity, { nullable: false, onDelete: 'RESTRICT' })
-  @JoinColumn({ name: 'processVersionId', foreignKeyConstraintName: 'FK_sheets_processVersion' })
-  processVersion: Relation<ProcessVersionEntity>;
 
   /** Default temperature of the devices, °C; the process tnom when null. */
   @Column({ type: 'real', nullable: true })

@@ -1,10 +1,9 @@
 import { createSheetRequestSchema, deviceTargetsSchema } from '@channelwright/shared/schemas';
 import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
-import { ProcessProfileEntity, processNameKey } from '../processes/process-profile.entity.js';
 import { ProcessesService } from '../processes/processes.service.js';
 import { WRENMOSS_PROJECT } from '../projects/projects-demo.seeder.js';
-import { ProjectEntity } from '../projects/project.entity.js';
+import { ProjectsService } from '../projects/projects.service.js';
 import type { DemoSeeder } from '../seed/demo-seeder.js';
 import { WRENMOSS_PROCESS_NAME, WRENMOSS_SHEETS } from './demo/wrenmoss-sheets.js';
 import { computationColumns, computeDevice } from './device-computation.js';
@@ -16,15 +15,18 @@ import { SheetEntity } from './sheet.entity.js';
 export class SheetsDemoSeeder implements DemoSeeder {
   readonly order = 30;
 
-  constructor(private readonly processes: ProcessesService) {}
+  constructor(
+    private readonly processes: ProcessesService,
+    private readonly projects: ProjectsService,
+  ) {}
 
   async seed(manager: EntityManager): Promise<void> {
-    const project = await manager.getRepository(ProjectEntity).findOneByOrFail({ name: WRENMOSS_PROJECT.name });
-    const profile = await manager.getRepository(ProcessProfileEntity).findOneByOrFail({ nameKey: processNameKey(WRENMOSS_PROCESS_NAME) });
-    const process = await this.processes.resolveDefinition(profile.id, undefined, manager);
+    const projectId = (await this.projects.idByName(WRENMOSS_PROJECT.name, manager))!;
+    const profileId = (await this.processes.profileIdByName(WRENMOSS_PROCESS_NAME, manager))!;
+    const process = await this.processes.resolveDefinition(profileId, undefined, manager);
     for (const demo of WRENMOSS_SHEETS) {
-      const { processId: _id, processVersion: _version, ...fields } = createSheetRequestSchema.parse({ ...demo.sheet, processId: profile.id });
-      const sheet = await manager.getRepository(SheetEntity).save(manager.create(SheetEntity, { ...fields, projectId: project.id, processVersionId: process.versionId }));
+      const { processId: _id, processVersion: _version, ...fields } = createSheetRequestSchema.parse({ ...demo.sheet, processId: profileId });
+      const sheet = await manager.getRepository(SheetEntity).save(manager.create(SheetEntity, { ...fields, projectId, processVersionId: process.versionId }));
       for (const [position, input] of demo.devices.entries()) {
         const targets = deviceTargetsSchema.parse(input);
         const computation = computeDevice(targets, sheet, process);

@@ -12,9 +12,11 @@ import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post, Query, Res
 import { ApiBearerAuth, ApiProduces, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import { z } from 'zod';
+import { CurrentUser } from '../common/auth/current-user.decorator.js';
 import { ApiZodBody, ApiZodResponse } from '../common/openapi/api-zod.decorators.js';
 import { ZodValidationPipe } from '../common/validation/zod-validation.pipe.js';
 import { ProjectAccess } from '../projects/project-access.guard.js';
+import type { Account } from '../users/users.service.js';
 import { SheetsService } from './sheets.service.js';
 
 /** One sheet: members read and export; designers and owners edit, delete and recompute. */
@@ -35,8 +37,8 @@ export class SheetsController {
   @ProjectAccess('edit', 'sheet')
   @ApiZodBody(updateSheetRequestSchema)
   @ApiZodResponse(200, sheetSchema, 'A move to another process version marks results stale until recompute; 409 STALE_EDIT')
-  update(@Param('id') id: string, @Body(new ZodValidationPipe(updateSheetRequestSchema)) request: UpdateSheetRequest): Promise<Sheet> {
-    return this.sheets.update(id, request);
+  update(@Param('id') id: string, @Body(new ZodValidationPipe(updateSheetRequestSchema)) request: UpdateSheetRequest, @CurrentUser() user: Account): Promise<Sheet> {
+    return this.sheets.update(id, request, user);
   }
 
   @Delete(':id')

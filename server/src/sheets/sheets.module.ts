@@ -2,7 +2,9 @@ import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { AuditModule } from '../audit/audit.module.js';
 import { ProcessesModule } from '../processes/processes.module.js';
+import { PROCESS_USE_SOURCES } from '../processes/process-visibility.js';
 import { PROJECT_RESOURCE_RESOLVERS } from '../projects/project-resource-resolver.js';
+import { PROJECT_SHEET_COUNTS } from '../projects/project-sheet-counts.js';
 import { ProjectsModule } from '../projects/projects.module.js';
 import { DEMO_SEEDERS } from '../seed/demo-seeder.js';
 import { DeviceEntity } from './device.entity.js';
@@ -11,6 +13,7 @@ import { DevicesService } from './devices.service.js';
 import { ProjectSheetsController } from './project-sheets.controller.js';
 import { SheetProjectResolver } from './sheet-project.resolver.js';
 import { SheetReader } from './sheet-reader.js';
+import { SheetUsage } from './sheet-usage.js';
 import { SheetEntity } from './sheet.entity.js';
 import { SheetsController } from './sheets.controller.js';
 import { SheetsDemoSeeder } from './sheets-demo.seeder.js';
@@ -18,7 +21,9 @@ import { SheetsService } from './sheets.service.js';
 
 /**
  * Sizing sheets and their devices, with results computed by the engine and stored. Exports SheetReader
- * (a sheet with its process version and devices, e.g. for freezing a revision) and SheetsService.
+ * (a sheet with its process version and devices, e.g. for freezing a revision) and SheetsService. Tells
+ * projects their sheet counts and the library who uses which process (SheetUsage); lets the features
+ * above it refuse a sheet's deletion (SHEET_REMOVAL_CHECKS).
  */
 @Module({
   imports: [TypeOrmModule.forFeature([SheetEntity, DeviceEntity]), ProcessesModule, ProjectsModule, AuditModule],
@@ -27,7 +32,10 @@ import { SheetsService } from './sheets.service.js';
     SheetsService,
     DevicesService,
     SheetReader,
+    SheetUsage,
     { provide: PROJECT_RESOURCE_RESOLVERS, useClass: SheetProjectResolver },
+    { provide: PROJECT_SHEET_COUNTS, useExisting: SheetUsage },
+    { provide: PROCESS_USE_SOURCES, useExisting: SheetUsage },
     { provide: DEMO_SEEDERS, useClass: SheetsDemoSeeder },
   ],
   exports: [SheetsService, SheetReader],

@@ -1,13 +1,13 @@
 import type { CreateSheetRequest, Sheet, SheetSummary, UpdateSheetRequest } from '@channelwright/shared/schemas';
 import { Injectable } from '@nestjs/common';
-import { InjectDataSource } from '@nestjs/typeorm';
-import type { DataSource } from 'typeorm';
+import { ModuleRef } from '@nestjs/core';
 import { AuditService } from '../audit/audit.service.js';
 import { sheetAudit, sheetFields } from '../audit/sheet-audit.js';
-import { runInTransaction } from '../database/run-in-transaction.js';
+import { registeredUnder } from '../common/extension-points.js';
+import { UnitOfWork } from '../database/unit-of-work.js';
+import type { ProcessViewer } from '../processes/process-visibility.js';
 import { ProcessesService } from '../processes/processes.service.js';
-import { ProjectEntity } from '../projects/project.entity.js';
-import { assertSheetHasNoRevisions } from '../revisions/assert-sheet-has-no-revisions.js';
+import { ProjectsService } from '../projects/projects.service.js';
 import { assertVersion } from '../projects/stale-edit.js';
 import { computationColumns, computeDevice } from './device-computation.js';
 import { DeviceEntity } from './device.entity.js';
@@ -15,16 +15,21 @@ import { sheetCsv, sheetCsvFileName } from './sheet-csv.js';
 import { assertSheetCorner, chosenProcess } from './sheet-process-choice.js';
 import { sheetNotFound, SheetReader } from './sheet-reader.js';
 import { targetsOf, toSheet, toSheetSummary } from './sheet-response.js';
+import { SHEET_REMOVAL_CHECKS, type SheetRemovalCheck } from './sheet-removal-check.js';
+import { SheetUsage } from './sheet-usage.js';
 import { SheetEntity } from './sheet.entity.js';
 
 /** Sheets of a project: create on a process version, edit (or move to another version), delete, recompute. Callers check access. */
 @Injectable()
 export class SheetsService {
   constructor(
-    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly unitOfWork: UnitOfWork,
     private readonly processes: ProcessesService,
+    private readonly projects: ProjectsService,
     private readonly reader: SheetReader,
+    private readonly usage: SheetUsage,
     private readonly audit: AuditService,
+    private readonly moduleRef: ModuleRef,
   ) {}
 
   async list(projectId: string): Promise<SheetSummary[]> {
@@ -38,13 +43,18 @@ export class SheetsService {
   /** The sheet as CSV (see sheetCsv for the layout) and its file name. */
   async exportCsv(sheetId: string): Promise<{ fileName: string; csv: string }> {
     const sheet = await this.get(sheetId);
-    const project = await this.dataSource.getRepository(ProjectEntity).findOneByOrFail({ id: sheet.projectId });
-    return { fileName: sheetCsvFileName(project.name, sheet.name), csv: sheetCsv(sheet, project.name, new Date()) };
+    const projectName = (await this.projects.namesOf([sheet.projectId])).get(sheet.projectId) ?? '';
+    return { fileName: sheetCsvFileName(projectName, sheet.name), csv: sheetCsv(sheet, projectName, new Date()) };
   }
 
-  async create(projectId: string, request: CreateSheetRequest): Promise<Sheet> {
-    const id = await runInTransaction(this.dataSource, async (manager) => {
-      const process = (await chosenProcess(this.processes, manager, request))!;
+  /** The process profiles the project's sheets are on (for the project's audit trail). */
+  profileIdsOfProject(projectId: string): Promise<string[]> {
+    return this.usage.profileIdsOfProjects([projectId]);
+  }
+
+  async create(projectId: string, request: CreateSheetRequest, editor: ProcessViewer): Promise<Sheet> {
+    const id = await this.unitOfWork.run(async (manager) => {
+      const process = (await chosenProcess(this.processes, manager, request, editor))!;
       assertSheetCorner(process.definition, request.corner);
       const { processId: _id, processVersion: _version, ...fields } = request;
       const sheet = await manager.getRepository(SheetEntity).save(manager.create(SheetEntity, { ...fields, projectId, processVersionId: process.versionId }));
@@ -58,12 +68,12 @@ export class SheetsService {
    * Edits the sheet's own fields. A move to another process version keeps every stored result, which is
    * then stale until recompute. 409 STALE_EDIT (nothing written) when `version` is not the stored one.
    */
-  async update(sheetId: string, request: UpdateSheetRequest): Promise<Sheet> {
-    await runInTransaction(this.dataSource, async (manager) => {
+  async update(sheetId: string, request: UpdateSheetRequest, editor: ProcessViewer): Promise<Sheet> {
+    await this.unitOfWork.run(async (manager) => {
       const loaded = await this.reader.load(sheetId, manager);
       const { sheet } = loaded;
       assertVersion('sheet', sheet, request.version);
-      const process = (await chosenProcess(this.processes, manager, request, loaded.process.profileId)) ?? loaded.process;
+      const process = (await chosenProcess(this.processes, manager, request, editor, loaded.process.profileId)) ?? loaded.process;
       const { version: _edited, processId: _id, processVersion: _number, ...fields } = request;
       const corner = fields.corner ?? sheet.corner;
       assertSheetCorner(process.definition, corner);
@@ -76,11 +86,11 @@ export class SheetsService {
 
   /** Deletes the sheet and its devices; with `version`, 409 STALE_EDIT when it is not the stored one. */
   async remove(sheetId: string, version: number | undefined): Promise<void> {
-    await runInTransaction(this.dataSource, async (manager) => {
+    await this.unitOfWork.run(async (manager) => {
       const sheet = await manager.getRepository(SheetEntity).findOneBy({ id: sheetId });
       if (!sheet) throw sheetNotFound();
       assertVersion('sheet', sheet, version);
-      await assertSheetHasNoRevisions(manager, sheetId);
+      for (const check of registeredUnder<SheetRemovalCheck>(this.moduleRef, SHEET_REMOVAL_CHECKS)) await check.assertRemovable(manager, sheetId);
       await manager.getRepository(DeviceEntity).delete({ sheetId });
       await manager.getRepository(SheetEntity).delete({ id: sheetId });
       await this.audit.record(manager, sheetAudit('sheet.deleted', sheet, sheetFields(sheet)));
@@ -89,7 +99,7 @@ export class SheetsService {
 
   /** Recomputes every device with the current engine on the sheet's process version, all in one transaction. */
   async recompute(sheetId: string): Promise<Sheet> {
-    await runInTransaction(this.dataSource, async (manager) => {
+    await this.unitOfWork.run(async (manager) => {
       const loaded = await this.reader.load(sheetId, manager);
       const devices = manager.getRepository(DeviceEntity);
       for (const device of loaded.devices) {

@@ -10,6 +10,7 @@ export function toUserResponse(user: UserEntity): User {
     role: user.role,
     disabled: user.disabled,
     processMaintainer: user.processMaintainer,
+    libraryAccess: user.libraryAccess,
     createdAt: user.createdAt.toISOString(),
   };
 }

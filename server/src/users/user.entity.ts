@@ -27,6 +27,14 @@ export class UserEntity {
   @Column({ type: 'boolean', default: false })
   processMaintainer: boolean;
 
+  /** Set by an admin: reads the whole process library, not only the processes its projects use. */
+  @Column({ type: 'boolean', default: false })
+  libraryAccess: boolean;
+
+  /** A self-registered account signs in only once it has followed the link mailed to its address. */
+  @Column({ type: 'boolean', default: false })
+  emailConfirmed: boolean;
+
   @CreateDateColumn()
   createdAt: Date;
 

@@ -2,7 +2,7 @@ import { updateUserRequestSchema, userSchema, type UpdateUserRequest, type User 
 import { Body, Controller, Get, Param, Patch } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { z } from 'zod';
-import { Roles } from '../auth/decorators/roles.decorator.js';
+import { Roles } from '../common/auth/roles.decorator.js';
 import { ApiZodBody, ApiZodResponse } from '../common/openapi/api-zod.decorators.js';
 import { ZodValidationPipe } from '../common/validation/zod-validation.pipe.js';
 import { toUserResponse } from './user-response.js';

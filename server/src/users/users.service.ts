@@ -1,56 +1,90 @@
-import type { UpdateUserRequest } from '@channelwright/shared/schemas';
+import type { UpdateUserRequest, UserRef } from '@channelwright/shared/schemas';
 import { Injectable } from '@nestjs/common';
-import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
-import type { DataSource, EntityManager, Repository } from 'typeorm';
+import { InjectRepository } from '@nestjs/typeorm';
+import { In, type EntityManager, type Repository } from 'typeorm';
 import { conflict, notFound } from '../common/errors/domain-error.js';
-import { runInTransaction } from '../database/run-in-transaction.js';
+import { UnitOfWork } from '../database/unit-of-work.js';
 import { UserEntity } from './user.entity.js';
 
 export interface NewAccount {
   email: string;
   displayName: string;
   passwordHash: string;
+  /** False (the default) for a self-registered account until it follows the link mailed to it. */
+  emailConfirmed?: boolean;
 }
 
+/** An account as UsersService hands it out (and the JWT guard puts on the request): other modules use this type, never the entity. */
+export type Account = UserEntity;
+
+/** A user as other modules show one: name and address, never the hash. */
+export interface UserCard extends UserRef {
+  email: string;
+}
+
+/** The accounts. Other modules read users only through this service (cards by id, lookup by e-mail). */
 @Injectable()
 export class UsersService {
   constructor(
     @InjectRepository(UserEntity) private readonly users: Repository<UserEntity>,
-    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly unitOfWork: UnitOfWork,
   ) {}
 
-  findById(id: string): Promise<UserEntity | null> {
-    return this.users.findOneBy({ id });
+  findById(id: string, manager?: EntityManager): Promise<UserEntity | null> {
+    return this.repository(manager).findOneBy({ id });
   }
 
-  findByEmail(email: string): Promise<UserEntity | null> {
-    return this.users.findOneBy({ email: email.trim().toLowerCase() });
+  findByEmail(email: string, manager?: EntityManager): Promise<UserEntity | null> {
+    return this.repository(manager).findOneBy({ email: email.trim().toLowerCase() });
+  }
+
+  /** Name and address of each id that is an account (missing ids are left out). */
+  async cards(ids: Iterable<string | null | undefined>, manager?: EntityManager): Promise<Map<string, UserCard>> {
+    const wanted = [...new Set([...ids].filter((id): id is string => typeof id === 'string'))];
+    if (wanted.length === 0) return new Map();
+    const rows = await this.repository(manager).find({ select: { id: true, displayName: true, email: true }, where: { id: In(wanted) } });
+    return new Map(rows.map((row) => [row.id, { id: row.id, displayName: row.displayName, email: row.email }]));
   }
 
   list(): Promise<UserEntity[]> {
     return this.users.find({ order: { email: 'ASC' } });
   }
 
-  async hasAnyAccount(): Promise<boolean> {
-    return (await this.users.count()) > 0;
+  async hasAnyAccount(manager?: EntityManager): Promise<boolean> {
+    return (await this.repository(manager).count()) > 0;
   }
 
-  /** Creates an account; the first account ever created becomes admin. */
-  createAccount(account: NewAccount): Promise<UserEntity> {
-    return runInTransaction(this.dataSource, async (manager) => {
-      const repository = manager.getRepository(UserEntity);
+  /** Creates an account; the first account ever created becomes admin. 409 EMAIL_TAKEN when the address has one. */
+  createAccount(account: NewAccount, manager?: EntityManager): Promise<UserEntity> {
+    const create = async (m: EntityManager) => {
+      const repository = m.getRepository(UserEntity);
       const email = account.email.trim().toLowerCase();
       if (await repository.existsBy({ email })) {
         throw conflict('EMAIL_TAKEN', 'An account with this e-mail already exists', 'email');
       }
       const isFirst = (await repository.count()) === 0;
       return repository.save(repository.create({ ...account, email, role: isFirst ? 'admin' : 'member' }));
-    });
+    };
+    return manager ? create(manager) : this.unitOfWork.run(create);
   }
 
-  /** Changes role, disabled or processMaintainer; refuses a change that would leave no enabled admin. */
+  /** Stores a new hash (a re-registration of an unconfirmed account, or a re-hash on sign-in). */
+  async setPassword(id: string, passwordHash: string, change: Partial<Pick<UserEntity, 'displayName'>> = {}, manager?: EntityManager): Promise<void> {
+    await this.repository(manager).update({ id }, { passwordHash, ...change });
+  }
+
+  /** Sets roles and grants directly, without the last-admin check (the demo seed, on an empty database). */
+  async grant(id: string, grants: Partial<Pick<UserEntity, 'role' | 'processMaintainer' | 'libraryAccess'>>, manager?: EntityManager): Promise<void> {
+    await this.repository(manager).update({ id }, grants);
+  }
+
+  async confirmEmail(id: string, manager?: EntityManager): Promise<void> {
+    await this.repository(manager).update({ id }, { emailConfirmed: true });
+  }
+
+  /** Changes role, disabled, processMaintainer or libraryAccess; refuses a change that would leave no enabled admin. */
   update(id: string, change: UpdateUserRequest): Promise<UserEntity> {
-    return runInTransaction(this.dataSource, async (manager) => {
+    return this.unitOfWork.run(async (manager) => {
       const repository = manager.getRepository(UserEntity);
       const user = await repository.findOneBy({ id });
       if (!user) throw notFound('USER_NOT_FOUND', 'There is no user with this id');
@@ -64,6 +98,10 @@ export class UsersService {
       }
       return repository.save(updated);
     });
+  }
+
+  private repository(manager: EntityManager | undefined): Repository<UserEntity> {
+    return manager ? manager.getRepository(UserEntity) : this.users;
   }
 }
 

@@ -4,6 +4,8 @@ import request from 'supertest';
 import { DataSource } from 'typeorm';
 import { createApp } from '../../src/app.factory.js';
 import type { EnvSource } from '../../src/config/load-config.js';
+import { MailDeliveryService } from '../../src/mail/mail-delivery.service.js';
+import { MailboxService } from '../../src/mail/mailbox.service.js';
 import { DEMO_PASSWORD } from '../../src/seed/demo-accounts.js';
 import { createTestEnv } from './test-env.js';
 
@@ -23,7 +25,7 @@ export interface TestApp {
   http(): ReturnType<typeof request>;
   /** Signs in and returns the access token; demo accounts need no password. Cached per account. */
   loginAs(email: string, password?: string): Promise<string>;
-  /** Registers an account and returns its token and user. */
+  /** Registers an account (following the confirmation link mailed to it, as its owner would) and returns its token and user. */
   register(account: RegisterRequest): Promise<AuthResponse>;
   close(): Promise<void>;
 }
@@ -58,14 +60,27 @@ export async function createTestApp(options: TestAppOptions = {}): Promise<TestA
     },
     async register(account) {
       const response = await http().post('/api/auth/register').send(account);
-      if (response.status !== 201) throw new Error(`register(${account.email}) answered ${response.status}: ${JSON.stringify(response.body)}`);
-      return response.body as AuthResponse;
+      if (response.status === 201) return response.body as AuthResponse;
+      if (response.status !== 202) throw new Error(`register(${account.email}) answered ${response.status}: ${JSON.stringify(response.body)}`);
+      const token = await confirmationToken(app, account.email);
+      const confirmed = await http().post('/api/auth/confirm').send({ token, password: account.password });
+      if (confirmed.status !== 200) throw new Error(`confirm(${account.email}) answered ${confirmed.status}: ${JSON.stringify(confirmed.body)}`);
+      return confirmed.body as AuthResponse;
     },
     async close() {
       await app.close();
       testEnv.remove();
     },
   };
+}
+
+/** The token of the newest confirmation link the local mail sink received for `email`. */
+export async function confirmationToken(app: NestExpressApplication, email: string): Promise<string> {
+  await app.get(MailDeliveryService).idle();
+  const [mail] = await app.get(MailboxService).received({ exactTo: email.trim().toLowerCase(), limit: 1 });
+  const link = /\/sign-in\?confirm=([^\s"<]+)/.exec(mail?.text ?? '');
+  if (!link) throw new Error(`no confirmation link was mailed to ${email}`);
+  return decodeURIComponent(link[1]);
 }
 
 /** The Authorization header for a token: `.set(bearer(token))`. */

@@ -100,3 +100,26 @@ export { operatingPointWarnings, WARNING_THRESHOLDS } from './warnings.js';
 
 // Invented demo data for the seed and the docs.
 export { BF180G, BF130G, DEMO_PROCESSES, DEMO_DATA_NOTICE } from './demo-processes.js';
+
+// The table model: sizing from tables characterised with a simulator on the designer's model card.
+export {
+  TABLE_FIELDS,
+  TABLE_ERROR_CODES,
+  TABLE_WARNING_CODES,
+  type TableWarning,
+  type TableField,
+  type VgsAxis,
+  type TableGrid,
+  type LookupTable,
+  tablePointCount,
+  lineOffset,
+  vgsOfNode,
+  checkTableGrid,
+  checkLookupTable,
+} from './lookup-table.js';
+export { encodeTable, decodeTable } from './table-codec.js';
+export { type DefaultGridInputs, defaultTableGrid } from './default-table-grid.js';
+export { MonotoneCubic, monotoneCubicAt } from './monotone-cubic.js';
+export { type PreparedTable, type TableConditions, TableLine, prepareTable, tableLine } from './table-lookup.js';
+export { type TableOperatingPoint, operatingPointOnLine, tableOperatingPoint } from './table-operating-point.js';
+export { type TableSizeTarget, type TableSizing, sizeFromTable, vgsForGmId, vgsForOverdrive, vgsForCurrentDensity } from './table-sizing.js';

@@ -27,6 +27,13 @@ export const registerRequestSchema = z.object({
 });
 export type RegisterRequest = z.infer<typeof registerRequestSchema>;
 
+/** Finishing sign-up: the token from the link mailed to the address, and the password chosen at sign-up. */
+export const confirmEmailRequestSchema = z.object({
+  token: z.string({ error: 'The confirmation link is incomplete' }).min(1, 'The confirmation link is incomplete').max(2000),
+  password: z.string({ error: 'Password is required' }).min(1, 'Password is required').max(200),
+});
+export type ConfirmEmailRequest = z.infer<typeof confirmEmailRequestSchema>;
+
 export const userSchema = z.object({
   id: z.string(),
   email: z.string(),
@@ -34,6 +41,11 @@ export const userSchema = z.object({
   role: globalRoleSchema,
   disabled: z.boolean(),
   processMaintainer: z.boolean(),
+  /**
+   * Granted by an admin: reads the whole process library, not only the processes of the user's projects.
+   * The server always sends it; optional only so that a client older than the field still reads a user.
+   */
+  libraryAccess: z.boolean().optional(),
   createdAt: z.string(),
 });
 export type User = z.infer<typeof userSchema>;
@@ -44,14 +56,26 @@ export const authResponseSchema = z.object({
 });
 export type AuthResponse = z.infer<typeof authResponseSchema>;
 
+/**
+ * The answer to a registration. The very first account of a server is signed in at once; every later one
+ * gets `confirmation-sent`, whether the address was new or taken (no account enumeration): the link in
+ * the mail, or the notice to the owner of a taken address, tells the rest.
+ */
+export const registerResponseSchema = z.discriminatedUnion('status', [
+  authResponseSchema.extend({ status: z.literal('signed-in') }),
+  z.object({ status: z.literal('confirmation-sent'), email: z.string() }),
+]);
+export type RegisterResponse = z.infer<typeof registerResponseSchema>;
+
 export const updateUserRequestSchema = z
   .object({
     role: globalRoleSchema.optional(),
     disabled: z.boolean().optional(),
     processMaintainer: z.boolean().optional(),
+    libraryAccess: z.boolean().optional(),
   })
   .strict()
-  .refine((v) => Object.keys(v).length > 0, { message: 'Give at least one of role, disabled, processMaintainer' });
+  .refine((v) => Object.keys(v).length > 0, { message: 'Give at least one of role, disabled, processMaintainer, libraryAccess' });
 export type UpdateUserRequest = z.infer<typeof updateUserRequestSchema>;
 
 export const healthResponseSchema = z.object({

@@ -13,6 +13,7 @@ export const WARNING_CODES = [
   'VDS_ABOVE_VDD',
   'TEMPERATURE_OUTSIDE_PROCESS_RANGE',
   'POINTS_WITHOUT_ANSWER',
+  'TEMPERATURE_INTERPOLATED',
 ] as const;
 export type WarningCode = (typeof WARNING_CODES)[number];
 

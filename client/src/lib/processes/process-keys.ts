@@ -1,10 +1,13 @@
 import type { ListProcessesQuery } from '@channelwright/shared/schemas';
 
-/** Every query key of the process library, from one place; mutations invalidate `processKeys.all`. */
+/**
+ * Every query key of the process library, from one place. The library's mutations invalidate `all`;
+ * the list and the detail live in lib (several features read them), versions and diffs in processes/.
+ */
 export const processKeys = {
   all: ['processes'] as const,
-  list: (query: Partial<ListProcessesQuery>) => ['processes', 'list', query] as const,
-  detail: (id: string, version?: number) => ['processes', 'detail', id, version ?? 'latest'] as const,
-  versions: (id: string) => ['processes', 'versions', id] as const,
-  diff: (id: string, from: number, to: number) => ['processes', 'diff', id, from, to] as const,
+  list: (query: Partial<ListProcessesQuery>) => [...processKeys.all, 'list', query] as const,
+  detail: (id: string, version?: number) => [...processKeys.all, 'detail', id, version ?? 'latest'] as const,
+  versions: (id: string) => [...processKeys.all, 'versions', id] as const,
+  diff: (id: string, from: number, to: number) => [...processKeys.all, 'diff', id, from, to] as const,
 };

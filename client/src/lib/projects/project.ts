@@ -1,6 +1,7 @@
 import { projectSchema, type Project } from '@channelwright/shared/schemas';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../api-client';
+import { projectKeys } from './project-keys';
 
 /**
  * `GET /api/projects/:id`: a project and the caller's role in it. Every page inside a project (its
@@ -10,6 +11,6 @@ export const getProject = (id: string, signal?: AbortSignal): Promise<Project> =
   apiRequest(`/projects/${encodeURIComponent(id)}`, { schema: projectSchema, signal });
 
 export const projectQueryOptions = (id: string) =>
-  queryOptions({ queryKey: ['projects', 'detail', id] as const, queryFn: ({ signal }) => getProject(id, signal) });
+  queryOptions({ queryKey: projectKeys.detail(id), queryFn: ({ signal }) => getProject(id, signal) });
 
 export const useProject = (id: string | undefined) => useQuery({ ...projectQueryOptions(id ?? ''), enabled: id !== undefined });

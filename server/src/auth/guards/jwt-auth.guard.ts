@@ -2,7 +2,7 @@ import { Injectable, type ExecutionContext } from '@nestjs/common';
 import { Reflector } from '@nestjs/core';
 import { AuthGuard } from '@nestjs/passport';
 import { unauthorized } from '../../common/errors/domain-error.js';
-import { IS_PUBLIC_KEY } from '../decorators/public.decorator.js';
+import { IS_PUBLIC_KEY } from '../../common/auth/public.decorator.js';
 
 /** Global: every route needs a valid Bearer token unless it is marked @Public(). */
 @Injectable()

@@ -4,6 +4,7 @@ import { Catch, HttpException, Logger, type ArgumentsHost, type ExceptionFilter 
 import type { Response } from 'express';
 import { ZodError } from 'zod';
 import { DomainError } from '../errors/domain-error.js';
+import { RateLimitedError } from '../errors/rate-limited-error.js';
 import { validationError } from '../validation/zod-issues.js';
 
 /** Codes for the HTTP exceptions Nest and its add-ons raise themselves (our own code throws DomainError). */
@@ -73,6 +74,7 @@ export class ApiExceptionFilter implements ExceptionFilter {
       response.end();
       return;
     }
+    if (exception instanceof RateLimitedError) response.setHeader('Retry-After', String(Math.max(1, exception.retryAfterSeconds)));
     response.status(body.statusCode).json(body);
   }
 }

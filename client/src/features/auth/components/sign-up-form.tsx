@@ -1,12 +1,14 @@
 import { registerRequestSchema, type RegisterRequest } from '@channelwright/shared/schemas';
-import { PasswordInput, TextInput } from '@mantine/core';
+import { Alert, PasswordInput, TextInput } from '@mantine/core';
 import { schemaResolver, useForm } from '@mantine/form';
 import { isApiError } from '../../../lib/api-error';
+import { usePublicConfig } from '../../../lib/public-config';
 import { useSignUp } from '../api/sign-up';
 import { AuthForm } from './auth-form';
 
 export function SignUpForm() {
   const signUp = useSignUp();
+  const config = usePublicConfig();
   const form = useForm<RegisterRequest>({
     mode: 'uncontrolled',
     initialValues: { displayName: '', email: '', password: '' },
@@ -21,6 +23,15 @@ export function SignUpForm() {
       },
     });
   });
+
+  if (signUp.data?.status === 'confirmation-sent')
+    return (
+      <Alert color="teal" variant="light" title="Check your mail" role="status">
+        We sent a message to {signUp.data.email}. Open the link in it and enter your password to finish signing up; the link works
+        for 24 hours.
+        {config.data?.demo && ' This demo server keeps its mail in a local inbox, which the demo administrator reads under Mail.'}
+      </Alert>
+    );
 
   return (
     <AuthForm

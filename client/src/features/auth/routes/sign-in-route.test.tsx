@@ -108,4 +108,27 @@ describe('the sign-in page', () => {
     expect(screen.getAllByText('invented demo data').length).toBeGreaterThan(0);
     expect(screen.queryByRole('link', { name: 'Create an account' })).not.toBeInTheDocument();
   });
+
+  it('finishes a sign-up from the mailed link with the password, then opens the home page', async () => {
+    const api = installFakeApi({
+      'GET /api/config': { body: demoConfig },
+      'POST /api/auth/confirm': ({ body }) =>
+        (body as { password: string }).password === 'long-enough-password'
+          ? { body: { accessToken: 'token-confirmed', user: designer } }
+          : errorBody(401, 'INVALID_CREDENTIALS', 'The e-mail or the password is wrong.'),
+      'GET /api/auth/me': { body: designer },
+    });
+    const { user, router } = renderApp('/sign-in?confirm=link-token');
+    const form = await screen.findByRole('form', { name: 'Confirm your account' });
+    await user.type(within(form).getByLabelText(/Password/), 'a-wrong-password');
+    await user.click(within(form).getByRole('button', { name: 'Confirm and sign in' }));
+    expect(await screen.findByRole('alert')).toHaveTextContent('The e-mail or the password is wrong.');
+    await user.clear(within(form).getByLabelText(/Password/));
+    await user.type(within(form).getByLabelText(/Password/), 'long-enough-password');
+    await user.click(within(form).getByRole('button', { name: 'Confirm and sign in' }));
+    expect(await screen.findByRole('heading', { name: `Welcome, ${designer.displayName}` })).toBeInTheDocument();
+    expect(router.state.location.pathname).toBe('/');
+    expect(api.to('POST /api/auth/confirm').at(-1)?.body).toEqual({ token: 'link-token', password: 'long-enough-password' });
+    expect(window.localStorage.getItem(AUTH_TOKEN_STORAGE_KEY)).toBe('token-confirmed');
+  });
 });

@@ -3,6 +3,7 @@ import { Link, Navigate, useSearchParams } from 'react-router-dom';
 import { usePublicConfig } from '../../../lib/public-config';
 import { useAuthToken } from '../../../lib/session/auth-token';
 import { AuthLayout } from '../components/auth-layout';
+import { ConfirmEmailForm } from '../components/confirm-email-form';
 import { DemoAccounts } from '../components/demo-accounts';
 import { SignInForm } from '../components/sign-in-form';
 import { safeNextPath } from './safe-next-path';
@@ -27,6 +28,15 @@ export default function SignInRoute() {
       {config.data?.demo && <DemoAccounts />}
     </Stack>
   );
+
+  // The link mailed at sign-up lands here with ?confirm=<token>.
+  const confirmToken = searchParams.get('confirm');
+  if (confirmToken)
+    return (
+      <AuthLayout title="Confirm your account">
+        <ConfirmEmailForm token={confirmToken} />
+      </AuthLayout>
+    );
 
   return (
     <AuthLayout title="Sign in" footer={footer}>

@@ -42,10 +42,10 @@ describe('the sign-up page', () => {
     expect(getAuthToken()).toBeNull();
   });
 
-  it('creates the account, signs it in and opens the home page', async () => {
+  it('creates the first account of a server, signs it in and opens the home page', async () => {
     const api = installFakeApi({
       'GET /api/config': { body: openConfig },
-      'POST /api/auth/register': { status: 201, body: { accessToken: 'token-new', user: designer } },
+      'POST /api/auth/register': { status: 201, body: { status: 'signed-in', accessToken: 'token-new', user: designer } },
       'GET /api/auth/me': { body: designer },
     });
     const { user, router } = renderApp('/sign-up');
@@ -58,5 +58,19 @@ describe('the sign-up page', () => {
       password: 'long-enough-password',
     });
     expect(getAuthToken()).toBe('token-new');
+  });
+
+  it('tells a later sign-up to follow the link mailed to the address, and signs nobody in', async () => {
+    installFakeApi({
+      'GET /api/config': { body: openConfig },
+      'POST /api/auth/register': { status: 202, body: { status: 'confirmation-sent', email: designer.email } },
+    });
+    const { user } = renderApp('/sign-up');
+    await fillSignUp(user, 'long-enough-password');
+    const notice = await screen.findByRole('status');
+    expect(notice).toHaveTextContent('Check your mail');
+    expect(notice).toHaveTextContent(`We sent a message to ${designer.email}`);
+    expect(screen.queryByRole('form', { name: 'Create an account' })).not.toBeInTheDocument();
+    expect(getAuthToken()).toBeNull();
   });
 });

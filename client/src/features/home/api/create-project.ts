@@ -1,7 +1,7 @@
 import { projectSchema, type CreateProjectRequestInput, type Project } from '@channelwright/shared/schemas';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { projectsQueryOptions } from './get-projects';
+import { projectKeys } from '../../../lib/projects/project-keys';
 
 /** `POST /api/projects`: the creator becomes its owner. Quiet: the dialog shows a refusal itself. */
 export const createProject = (request: CreateProjectRequestInput): Promise<Project> =>
@@ -11,6 +11,6 @@ export function useCreateProject() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: createProject,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: projectsQueryOptions().queryKey }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: projectKeys.list() }),
   });
 }

@@ -1,12 +1,13 @@
 import { projectListSchema, type ProjectList } from '@channelwright/shared/schemas';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
+import { projectKeys } from '../../../lib/projects/project-keys';
 
 /** `GET /api/projects`: the projects the user belongs to (every project for administrators). */
 export const getProjects = (signal?: AbortSignal): Promise<ProjectList> =>
   apiRequest('/projects', { schema: projectListSchema, signal });
 
 export const projectsQueryOptions = () =>
-  queryOptions({ queryKey: ['projects', 'list'] as const, queryFn: ({ signal }) => getProjects(signal) });
+  queryOptions({ queryKey: projectKeys.list(), queryFn: ({ signal }) => getProjects(signal) });
 
 export const useProjects = () => useQuery(projectsQueryOptions());

@@ -1,7 +1,7 @@
 import { processProfileSchema, type ProcessProfile } from '@channelwright/shared/schemas';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { processKeys } from '../../../lib/processes/process-keys';
+import { invalidateMovedProfile } from './profile-moved';
 
 export interface DeprecateProcessInput {
   id: string;
@@ -14,5 +14,5 @@ export const deprecateProcess = ({ id, deprecated }: DeprecateProcessInput): Pro
 
 export function useDeprecateProcess() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: deprecateProcess, onSuccess: () => queryClient.invalidateQueries({ queryKey: processKeys.all }) });
+  return useMutation({ mutationFn: deprecateProcess, onSuccess: () => invalidateMovedProfile(queryClient) });
 }

@@ -1,7 +1,7 @@
 import { processProfileSchema, type ProcessProfile, type UpdateProcessRequest } from '@channelwright/shared/schemas';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { processKeys } from '../../../lib/processes/process-keys';
+import { invalidateMovedProfile } from './profile-moved';
 
 export interface UpdateProcessInput {
   id: string;
@@ -14,5 +14,5 @@ export const updateProcess = ({ id, request }: UpdateProcessInput): Promise<Proc
 
 export function useUpdateProcess() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: updateProcess, onSuccess: () => queryClient.invalidateQueries({ queryKey: processKeys.all }) });
+  return useMutation({ mutationFn: updateProcess, onSuccess: () => invalidateMovedProfile(queryClient) });
 }

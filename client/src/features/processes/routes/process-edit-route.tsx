@@ -4,7 +4,7 @@ import { useNavigate, useParams } from 'react-router-dom';
 import { ErrorPanel } from '../../../components/error-panel';
 import { PageHeader } from '../../../components/page-header';
 import { PageLoader } from '../../../components/page-loader';
-import { useProcess } from '../api/get-process';
+import { useProcess } from '../../../lib/processes/process';
 import { processKeys } from '../../../lib/processes/process-keys';
 import { useUpdateProcess } from '../api/update-process';
 import { ProcessCautions } from '../components/process-cautions';

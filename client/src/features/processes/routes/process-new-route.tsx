@@ -2,7 +2,7 @@ import { useNavigate, useSearchParams } from 'react-router-dom';
 import { PageHeader } from '../../../components/page-header';
 import { PageLoader } from '../../../components/page-loader';
 import { useCreateProcess } from '../api/create-process';
-import { useProcess } from '../api/get-process';
+import { useProcess } from '../../../lib/processes/process';
 import { ProcessEditorForm } from '../components/process-editor-form';
 import { blankFormValues, toFormValues } from '../utils/process-form-values';
 

@@ -9,7 +9,7 @@ import { PageLoader } from '../../../components/page-loader';
 import { RegionErrorBoundary } from '../../../components/region-error-boundary';
 import { useSignedInUser } from '../../../lib/session/current-user';
 import { canMaintainProcesses } from '../../../lib/session/permissions';
-import { useProcess } from '../api/get-process';
+import { useProcess } from '../../../lib/processes/process';
 import { useProcessVersions } from '../api/get-process-versions';
 import { CornersTable } from '../components/corners-table';
 import { ImportProcessPanel } from '../components/import-process-panel';

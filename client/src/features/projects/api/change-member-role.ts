@@ -1,7 +1,8 @@
 import { projectMemberSchema, type ProjectMember, type ProjectRole } from '@channelwright/shared/schemas';
 import { useMutation } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { membersPath, useRefreshMembers } from './refresh-members';
+import { membersPath } from '../../../lib/projects/members';
+import { useRefreshMembers } from './refresh-members';
 
 /** `PATCH /api/projects/:id/members/:userId` (owners); 409 LAST_OWNER keeps the project owned. */
 export const changeMemberRole = ({ projectId, userId, role }: { projectId: string; userId: string; role: ProjectRole }): Promise<ProjectMember> =>

@@ -1,8 +1,8 @@
 import { sheetSchema, type CreateSheetRequestInput, type Sheet } from '@channelwright/shared/schemas';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { projectQueryOptions } from '../../../lib/projects/project';
-import { projectSheetsQueryOptions } from './get-project-sheets';
+import { projectKeys } from '../../../lib/projects/project-keys';
+import { sheetKeys } from '../../../lib/sheets/sheet-keys';
 
 export interface CreateSheetInput {
   projectId: string;
@@ -13,14 +13,16 @@ export interface CreateSheetInput {
 export const createSheet = ({ projectId, request }: CreateSheetInput): Promise<Sheet> =>
   apiRequest(`/projects/${encodeURIComponent(projectId)}/sheets`, { method: 'POST', body: request, schema: sheetSchema, quiet: true });
 
+/** A new sheet changes the project's sheet list and its sheet count, on the project page and on the home page's list. */
 export function useCreateSheet() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: createSheet,
     onSuccess: (_sheet, { projectId }) =>
       Promise.all([
-        queryClient.invalidateQueries({ queryKey: projectSheetsQueryOptions(projectId).queryKey }),
-        queryClient.invalidateQueries({ queryKey: projectQueryOptions(projectId).queryKey }),
+        queryClient.invalidateQueries({ queryKey: sheetKeys.list(projectId) }),
+        queryClient.invalidateQueries({ queryKey: projectKeys.detail(projectId) }),
+        queryClient.invalidateQueries({ queryKey: projectKeys.list() }),
       ]),
   });
 }

@@ -1,12 +1,14 @@
 import { sheetListSchema, type SheetList } from '@channelwright/shared/schemas';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
+import { sheetKeys } from '../../../lib/sheets/sheet-keys';
 
-/** `GET /api/projects/:id/sheets`: the project's sheets, by name. */
+/** `GET /api/projects/:id/sheets`: the project's sheets, by name, with their device and stale counts. */
 export const getProjectSheets = (projectId: string, signal?: AbortSignal): Promise<SheetList> =>
   apiRequest(`/projects/${encodeURIComponent(projectId)}/sheets`, { schema: sheetListSchema, signal });
 
+/** Under the sheets' keys, so every change to a device (which moves these counts) refreshes it. */
 export const projectSheetsQueryOptions = (projectId: string) =>
-  queryOptions({ queryKey: ['projects', 'sheets', projectId] as const, queryFn: ({ signal }) => getProjectSheets(projectId, signal) });
+  queryOptions({ queryKey: sheetKeys.list(projectId), queryFn: ({ signal }) => getProjectSheets(projectId, signal) });
 
 export const useProjectSheets = (projectId: string) => useQuery(projectSheetsQueryOptions(projectId));

@@ -1,16 +1,15 @@
 import { useQueryClient } from '@tanstack/react-query';
-import { projectQueryOptions } from '../../../lib/projects/project';
-import { membersQueryOptions } from './get-members';
+import { projectKeys } from '../../../lib/projects/project-keys';
 
-/** After any member change: re-read the members and the project (its member count, your role). */
+/**
+ * After any member change: the project (your role, its member count) with its members under it, and
+ * the home page's list of projects (their member counts; a removed member loses the project).
+ */
 export function useRefreshMembers(projectId: string) {
   const queryClient = useQueryClient();
   return () =>
     Promise.all([
-      queryClient.invalidateQueries({ queryKey: membersQueryOptions(projectId).queryKey }),
-      queryClient.invalidateQueries({ queryKey: projectQueryOptions(projectId).queryKey }),
+      queryClient.invalidateQueries({ queryKey: projectKeys.detail(projectId) }),
+      queryClient.invalidateQueries({ queryKey: projectKeys.list() }),
     ]);
 }
-
-export const membersPath = (projectId: string, userId?: string) =>
-  `/projects/${encodeURIComponent(projectId)}/members${userId ? `/${encodeURIComponent(userId)}` : ''}`;

@@ -4,7 +4,7 @@ import { IconUserMinus } from '@tabler/icons-react';
 import { ErrorPanel } from '../../../components/error-panel';
 import { PageLoader } from '../../../components/page-loader';
 import { useChangeMemberRole } from '../api/change-member-role';
-import { useMembers } from '../api/get-members';
+import { useMembers } from '../../../lib/projects/members';
 import { useRemoveMember } from '../api/remove-member';
 import { AddMemberForm } from './add-member-form';
 import { ROLE_LABELS, ROLE_MEANINGS } from './role-labels';

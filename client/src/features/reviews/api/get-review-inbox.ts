@@ -1,6 +1,7 @@
 import { reviewRequestListSchema, type ReviewInboxQuery, type ReviewRequest } from '@channelwright/shared/schemas';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
+import { reviewKeys } from '../../../lib/reviews/review-keys';
 
 /** `GET /api/review-requests?mine=assigned|authored&state=`: the signed-in user's inbox, newest first. */
 export const getReviewInbox = (query: Partial<ReviewInboxQuery>, signal?: AbortSignal): Promise<ReviewRequest[]> => {
@@ -11,6 +12,6 @@ export const getReviewInbox = (query: Partial<ReviewInboxQuery>, signal?: AbortS
 };
 
 export const reviewInboxQueryOptions = (query: Partial<ReviewInboxQuery>) =>
-  queryOptions({ queryKey: ['review-requests', 'inbox', query] as const, queryFn: ({ signal }) => getReviewInbox(query, signal) });
+  queryOptions({ queryKey: reviewKeys.inbox(query), queryFn: ({ signal }) => getReviewInbox(query, signal) });
 
 export const useReviewInbox = (query: Partial<ReviewInboxQuery>) => useQuery(reviewInboxQueryOptions(query));

@@ -1,4 +1,3 @@
-import type { SheetReviewState } from '@channelwright/shared/schemas';
 import { screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { MemoryRouter } from 'react-router-dom';
@@ -9,22 +8,10 @@ import { currentUserQueryOptions } from '../../../lib/session/current-user';
 import { errorBody, installFakeApi } from '../../../test/fake-api';
 import { renderWithProviders } from '../../../test/render-app';
 import { designer, reviewer } from '../../../test/fixtures';
-import { project, reviewRequest, revision } from '../testing/revision-fixtures';
+import { draftReviewState, project, reviewRequest, revision } from '../testing/revision-fixtures';
 import { RevisionPanel } from './revision-panel';
 
 const LOADED = { timeout: 5000 };
-
-const draftState = (change: Partial<SheetReviewState> = {}): SheetReviewState => ({
-  sheetId: 's-amp',
-  projectId: 'p-wren',
-  state: 'draft',
-  latestRevision: null,
-  lastSignedOff: null,
-  changedSinceLatest: true,
-  revisions: [],
-  openRequests: [],
-  ...change,
-});
 
 function renderPanel() {
   setAuthToken('token-ines');
@@ -40,7 +27,7 @@ function renderPanel() {
 }
 
 function fakeServer(options: { refuseRequest?: boolean } = {}) {
-  let state = draftState();
+  let state = draftReviewState();
   const members = [
     { userId: designer.id, email: designer.email, displayName: designer.displayName, role: 'owner', addedAt: '2026-01-01T00:00:00.000Z' },
     { userId: reviewer.id, email: reviewer.email, displayName: reviewer.displayName, role: 'reviewer', addedAt: '2026-01-01T00:00:00.000Z' },
@@ -53,7 +40,7 @@ function fakeServer(options: { refuseRequest?: boolean } = {}) {
     'GET /api/projects/p-wren/members': { body: members },
     'POST /api/sheets/s-amp/revisions': () => {
       const { devices: _devices, sheet: _sheet, ...summary } = revision({ state: 'draft' });
-      state = draftState({ latestRevision: summary, revisions: [summary], changedSinceLatest: false });
+      state = draftReviewState({ latestRevision: summary, revisions: [summary], changedSinceLatest: false });
       return { status: 201, body: revision({ state: 'draft' }) };
     },
     'POST /api/revisions/rev-1/review-requests': () => (options.refuseRequest ? errorBody(400, 'REVIEWER_NOT_ELIGIBLE', 'The reviewer must be a member of this project with the owner or reviewer role', 'reviewerId') : { status: 201, body: reviewRequest() }),

@@ -8,6 +8,7 @@ import {
   type ReviewRequest,
   type Revision,
   type RevisionDevice,
+  type SheetReviewState,
 } from '@channelwright/shared/schemas';
 import { designer, reviewer } from '../../../test/fixtures';
 
@@ -84,3 +85,18 @@ export function project(myRole: ProjectRole | null): Project {
 }
 
 export const HASH_OF_R1 = HASH;
+
+/** The review state of a sheet never frozen: a draft that differs from its (absent) latest revision. */
+export function draftReviewState(change: Partial<SheetReviewState> = {}): SheetReviewState {
+  return {
+    sheetId: 's-amp',
+    projectId: 'p-wren',
+    state: 'draft',
+    latestRevision: null,
+    lastSignedOff: null,
+    changedSinceLatest: true,
+    revisions: [],
+    openRequests: [],
+    ...change,
+  };
+}

@@ -27,7 +27,15 @@ function SelfGuard({ isSelf, children }: { isSelf: boolean; children: React.Reac
   );
 }
 
-/** Every account with its role, its access and whether it maintains the process library. */
+/**
+ * Without library access, a member reads only the process profiles its projects' sheets use; administrators
+ * and process maintainers read (and write) all of them.
+ */
+function readsAllAnyway(user: User): boolean {
+  return user.role === 'admin' || user.processMaintainer;
+}
+
+/** Every account with its role, its access, whether it maintains the process library and whether it reads all of it. */
 export function UsersTable({ users, currentUserId, onChange, pendingUserId }: UsersTableProps) {
   const rows = users.map((user) => {
     const isSelf = user.id === currentUserId;
@@ -71,6 +79,16 @@ export function UsersTable({ users, currentUserId, onChange, pendingUserId }: Us
           />
         </Table.Td>
         <Table.Td>
+          <Tooltip label="Administrators and process maintainers read the whole library anyway" disabled={!readsAllAnyway(user)}>
+            <Switch
+              aria-label={`${user.displayName} reads the whole process library`}
+              checked={readsAllAnyway(user) || (user.libraryAccess ?? false)}
+              disabled={busy || readsAllAnyway(user)}
+              onChange={(event) => onChange({ id: user.id, changes: { libraryAccess: event.currentTarget.checked } })}
+            />
+          </Tooltip>
+        </Table.Td>
+        <Table.Td>
           <SelfGuard isSelf={isSelf}>
             <Switch
               aria-label={`${user.displayName} may sign in`}
@@ -90,13 +108,14 @@ export function UsersTable({ users, currentUserId, onChange, pendingUserId }: Us
   });
 
   return (
-    <Table.ScrollContainer minWidth={720}>
+    <Table.ScrollContainer minWidth={840}>
       <Table verticalSpacing="sm" highlightOnHover aria-label="Users">
         <Table.Thead>
           <Table.Tr>
             <Table.Th>Name</Table.Th>
             <Table.Th>Role</Table.Th>
             <Table.Th>Process maintainer</Table.Th>
+            <Table.Th>Whole library</Table.Th>
             <Table.Th>May sign in</Table.Th>
             <Table.Th>Joined</Table.Th>
           </Table.Tr>

@@ -57,6 +57,18 @@ describe('the users page', () => {
     expect(api.to('GET /api/users').length).toBeGreaterThanOrEqual(2);
   });
 
+  it('grants a member the whole process library, and shows it as granted for administrators and maintainers', async () => {
+    const api = fakeUsersServer();
+    const { user } = await openUsersPage();
+
+    expect(screen.getByRole('switch', { name: `${admin.displayName} reads the whole process library` })).toBeChecked();
+    expect(screen.getByRole('switch', { name: `${admin.displayName} reads the whole process library` })).toBeDisabled();
+    await user.click(screen.getByRole('switch', { name: `${reviewer.displayName} reads the whole process library` }));
+
+    expect(api.to(`PATCH /api/users/${reviewer.id}`).map((p) => p.body)).toEqual([{ libraryAccess: true }]);
+    await screen.findByRole('switch', { name: `${reviewer.displayName} reads the whole process library`, checked: true });
+  });
+
   it('turns an account off', async () => {
     const api = fakeUsersServer();
     const { user } = await openUsersPage();

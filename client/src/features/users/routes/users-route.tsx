@@ -32,7 +32,7 @@ export default function UsersRoute() {
     <>
       <PageHeader
         title="Users"
-        description="Give administrator rights, let people maintain the process library, or turn an account off."
+        description="Give administrator rights, let people maintain or read the whole process library, or turn an account off. A new account reads only the processes of the projects it is added to."
       />
       {body}
     </>

@@ -1,0 +1,48 @@
+import { useState } from 'react';
+import { ErrorPanel } from '../../../components/error-panel';
+import { PageHeader } from '../../../components/page-header';
+import { PageLoader } from '../../../components/page-loader';
+import { useProcess } from '../../../lib/processes/process';
+import { useProcessProfiles } from '../../../lib/processes/process-profiles';
+import { DeviceWorkbench } from '../components/device-workbench';
+import { ProcessPicker } from '../components/process-picker';
+import { useTargetsForm } from '../hooks/use-targets-form';
+import type { SizedDeviceView } from '../model/sized-device';
+
+export interface ScratchDeviceRouteProps {
+  /** Drawn under the results once the device is sized: the app passes the design charts. */
+  charts?: SizedDeviceView;
+}
+
+/** Size a device without a sheet: pick a process, type the targets, read the results. Nothing is stored. */
+export default function ScratchDeviceRoute({ charts }: ScratchDeviceRouteProps = {}) {
+  const profiles = useProcessProfiles();
+  const [chosenId, setChosenId] = useState<string | null>(null);
+  const available = profiles.data?.filter((p) => !p.deprecated) ?? [];
+  const summary = available.find((p) => p.id === chosenId) ?? available[0];
+  const profile = useProcess(summary?.id, summary?.latestVersion);
+  const { values, setField } = useTargetsForm();
+
+  const header = (
+    <PageHeader title="Size a device" description="A scratch pad: results follow your typing and nothing is saved. Sheets keep sized devices." />
+  );
+  if (profiles.isPending) return <>{header}<PageLoader label="Loading the process library" /></>;
+  if (profiles.isError) return <>{header}<ErrorPanel title="The process library could not be loaded" message={profiles.error.message} onRetry={() => void profiles.refetch()} /></>;
+  if (!summary) return <>{header}<ErrorPanel title="No process profiles yet" message="An administrator or process maintainer adds process profiles to the library first." /></>;
+  if (profile.isError) return <>{header}<ErrorPanel title="The process could not be loaded" message={profile.error.message} onRetry={() => void profile.refetch()} /></>;
+  if (!profile.data) return <>{header}<PageLoader label="Loading the process" /></>;
+
+  return (
+    <>
+      {header}
+      <DeviceWorkbench
+        values={values}
+        onChange={setField}
+        process={profile.data.version.definition}
+        processRef={{ processId: summary.id, processVersion: summary.latestVersion }}
+        formHeader={<ProcessPicker profiles={available} value={summary.id} onChange={setChosenId} />}
+        charts={charts}
+      />
+    </>
+  );
+}
