@@ -1,4 +1,5 @@
 import { epsilon0, epsilonRSiO2 } from '../units/constants.js';
+import { normalisedCharge } from './inversion-charge.js';
 
 /** Cox = εr(SiO2)·ε0/tox in F/m² (εr = 3.9, ε0 CODATA 2018). 10 nm → 3.4531e-3 F/m² = 3.4531 fF/µm². */
 export function oxideCapacitance(tox: number): number {
@@ -25,20 +26,10 @@ export interface GateCapacitances {
   cgg: number;
 }
 
-/** Normalised inversion charge q from a normalised current i, the EKV relation i = q² + q. */
-function chargeOf(i: number): number {
-  return i / (Math.sqrt(0.25 + i) + 0.5);
-}
-
-/** ln(1 + eˣ) without overflow. */
-function softplus(x: number): number {
-  return x > 0 ? x + Math.log1p(Math.exp(-x)) : Math.log1p(Math.exp(x));
-}
-
 /**
  * Charge-based gate capacitances in every region (Enz & Vittoz, Charge-Based MOS Transistor Modeling, Wiley,
- * 2006, ch. 5, from memory): with the normalised source and drain charges q_s, q_d of the forward and reverse
- * inversion coefficients i_f = ln²(1 + e^x_f), i_r = ln²(1 + e^x_r) (x as in drain-current.ts),
+ * 2006, ch. 5, from memory): with the normalised source and drain charges q_s, q_d of the drain-current model
+ * (2q + ln q = v, v_s = VOV/(nUT), v_d = (VOV − n·VDS)/(nUT); inversion-charge.ts),
  *   Cgs/(W·L·Cox) = q_s(2q_s + 4q_d + 3) / (3(q_s + q_d + 1)²),  Cgd/(W·L·Cox) = q_d(4q_s + 2q_d + 3) / (3(q_s + q_d + 1)²),
  *   Cgb/(W·L·Cox) = ((n − 1)/n)·(1 − Cgs/(W·L·Cox) − Cgd/(W·L·Cox)),
  * plus the overlaps W·cgdo on Cgs and Cgd. Limits: strong saturation Cgs = (2/3)·W·L·Cox, Cgb = (n − 1)/(3n)·W·L·Cox
@@ -46,9 +37,9 @@ function softplus(x: number): number {
  * Cgs = Cgd = W·L·Cox/2. w and l are the effective width and length.
  */
 export function gateCapacitances(w: number, l: number, cox: number, cgdo: number, bias: ChargeBias): GateCapacitances {
-  const a = 2 * bias.n * bias.ut;
-  const qs = chargeOf(softplus(bias.vov / a) ** 2);
-  const qd = chargeOf(softplus((bias.vov - bias.n * bias.vds) / a) ** 2);
+  const nu = bias.n * bias.ut;
+  const qs = normalisedCharge(bias.vov / nu);
+  const qd = normalisedCharge((bias.vov - bias.n * bias.vds) / nu);
   const denominator = 3 * (qs + qd + 1) ** 2;
   const gs = (qs * (2 * qs + 4 * qd + 3)) / denominator;
   const gd = (qd * (4 * qs + 2 * qd + 3)) / denominator;

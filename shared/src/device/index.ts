@@ -3,6 +3,7 @@
  * polarity-normalised voltages (PMOS: VSG, VSD, VBS, vt = −VTP). Equations and sources: docs/model.md.
  */
 export { ENGINE_VERSION } from './engine-version.js';
+export { modelAccuracyOf } from './model-accuracy.js';
 export { EngineError, isEngineError } from './errors.js';
 
 // The three calls of the compute API (parse, check against the process, compute).
@@ -14,6 +15,7 @@ export { parseOrThrow } from './parse-request.js';
 export { type PreparedDevice, prepareDevice, deviceParamsOf, cornerShiftOf, thresholdAt } from './resolve-device.js';
 export { type Bias, type OperatingPoint, operatingPoint } from './operating-point.js';
 export { channelCurrentAt } from './channel-current.js';
+export { normalisedCharge } from './inversion-charge.js';
 
 // Sizing, sweeps, corners.
 export { type SizeTarget, type Sizing, type Constraint, solveSize, MAX_WIDTH } from './solve.js';

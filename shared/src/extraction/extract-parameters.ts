@@ -61,6 +61,11 @@ export interface ExtractionResult {
   readonly held: { readonly name: FitParameter; readonly value: number | undefined; readonly reason: string }[];
   readonly fitted: DeviceParams;
   readonly rms: RegionError[];
+  /**
+   * All-region fits: RMS of ln(current density of the model / measured) at the measured gm/ID, over the points of
+   * the sizing range the density was fitted on: how far a W sized by gm/ID is off, free of the threshold's error.
+   */
+  readonly densityRms: number | null;
   readonly excluded: ExcludedPoint[];
   readonly iterations: number;
   readonly converged: boolean;
@@ -99,24 +104,6 @@ function measuredGmId(points: readonly MeasuredPoint[]): number[] {
     }
   }
   return gmId;
-}
-
-/** √ of the gm/ID span of each chosen point (half the distance to its neighbours' gm/ID), normalised to a mean of 1. */
-function densityWeights(points: readonly MeasuredPoint[], curves: readonly MeasuredCurve[], gmId: readonly number[], chosen: ReadonlySet<number>): number[] {
-  const span = new Map<number, number>();
-  for (const curve of curves) {
-    const { indices } = curve;
-    indices.forEach((index, k) => {
-      if (!chosen.has(index)) return;
-      const before = gmId[indices[Math.max(0, k - 1)]];
-      const after = gmId[indices[Math.min(indices.length - 1, k + 1)]];
-      const width = Math.abs((Number.isFinite(before) ? before : gmId[index]) - (Number.isFinite(after) ? after : gmId[index])) / 2;
-      span.set(index, width);
-    });
-  }
-  const order = curves.flatMap((curve) => curve.indices.filter((index) => chosen.has(index)));
-  const mean = order.reduce((sum, index) => sum + (span.get(index) ?? 0), 0) / Math.max(order.length, 1);
-  return order.map((index) => Math.sqrt((span.get(index) ?? 0) / (mean || 1)));
 }
 
 /** Points a fit can read, and the reasons for the others. */
@@ -213,8 +200,9 @@ export function extractParameters(input: ExtractionInput, onProgress?: (progress
   const model = new ModelAtPoints(input.polarity, input.model, input.base, points);
   let done = 0;
   const report = (iterations: number, error: number) => onProgress?.({ iterations: done + iterations, maxIterations, error });
+  const boundsOf = (name: FitParameter) => fitBounds(name, lmin);
   const stage = (names: readonly FitParameter[], residualsOf: (params: DeviceParams) => Float64Array) => {
-    const problem = fitProblem(input.base.params, names, values, lmin, residualsOf);
+    const problem = fitProblem(input.base.params, names, values, boundsOf, residualsOf);
     const result = fitInRounds(problem, problem.start, maxIterations, report);
     done += result.iterations;
     values = problem.valuesOf(result.values);
@@ -225,6 +213,7 @@ export function extractParameters(input: ExtractionInput, onProgress?: (progress
   let values = new Map<FitParameter, number>(fit.map((name) => [name, startOf(name)]));
   const errors = new Map<FitParameter, number | null>();
   let converged: boolean;
+  let densityRms: number | null = null;
   if (input.model === 'square-law') {
     // SPICE level 1's own parameters: one joint fit of ln ID over every usable point.
     converged = stage(fit, (params) => model.logResiduals(params, used));
@@ -236,10 +225,9 @@ export function extractParameters(input: ExtractionInput, onProgress?: (progress
     const gmId = measuredGmId(points);
     const ceiling = new Map<MeasuredCurve, number>(curves.map((curve) => [curve, Math.max(...curve.indices.map((i) => (Number.isFinite(gmId[i]) ? gmId[i] : 0)))]));
     const dense = curves.flatMap((curve) => curve.indices.filter((i) => Number.isFinite(gmId[i]) && gmId[i] <= DENSITY_CEILING_FRACTION * (ceiling.get(curve) as number)));
-    // Each point weighs by the stretch of gm/ID it stands for, so the fit is even over gm/ID, not crowded
-    // into strong inversion where equal VGS steps put most of the points.
-    const weight = densityWeights(points, curves, gmId, new Set(dense));
-    const shaped = stage(fit.filter((name) => SHAPE.has(name)), (params) => model.densityResiduals(params, dense, gmId).map((r, k) => r * weight[k]));
+    const shaped = stage(fit.filter((name) => SHAPE.has(name)), (params) => model.densityResiduals(params, dense, gmId));
+    const densityResiduals = model.densityResiduals(withFitted(input.base.params, [...values.keys()], [...values.values()]), dense, gmId);
+    densityRms = Math.sqrt(densityResiduals.reduce((sum, r) => sum + r * r, 0) / Math.max(densityResiduals.length, 1));
     const offsets = new Map<MeasuredCurve, number>();
     // 2. The threshold law (VT0, body effect, DIBL, length, temperature) through the threshold each curve showed.
     const atShape = withFitted(input.base.params, [...values.keys()], [...values.values()]);
@@ -259,6 +247,7 @@ export function extractParameters(input: ExtractionInput, onProgress?: (progress
     held: held.map(({ name, reason }) => ({ name, value: input.base.params[name], reason })),
     fitted,
     rms: regionErrors(input, fitted, residuals, usable),
+    densityRms,
     excluded,
     iterations: done,
     converged,
@@ -268,9 +257,15 @@ export function extractParameters(input: ExtractionInput, onProgress?: (progress
 }
 
 /** A least-squares problem over some parameters, the others held at their current values, in units of each one's scale. */
-function fitProblem(base: DeviceParams, names: readonly FitParameter[], values: ReadonlyMap<FitParameter, number>, lmin: number, residualsOf: (params: DeviceParams) => Float64Array) {
+function fitProblem(
+  base: DeviceParams,
+  names: readonly FitParameter[],
+  values: ReadonlyMap<FitParameter, number>,
+  boundsOf: (name: FitParameter) => { min: number; max: number },
+  residualsOf: (params: DeviceParams) => Float64Array,
+) {
   const scale = names.map((name) => FIT_PARAMETER_INFO[name].scale);
-  const bounds = names.map((name) => fitBounds(name, lmin));
+  const bounds = names.map(boundsOf);
   const heldNames = [...values.keys()].filter((name) => !names.includes(name));
   const paramsOf = (normalised: readonly number[]) =>
     withFitted(base, [...heldNames, ...names], [...heldNames.map((name) => values.get(name) as number), ...names.map((_, k) => normalised[k] * scale[k])]);

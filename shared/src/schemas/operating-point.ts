@@ -63,8 +63,16 @@ export const operatingPointSchema = z.object({
 });
 export type OperatingPointResponse = z.infer<typeof operatingPointSchema>;
 
+/** How far the model that made a result is known to be off (device/model-accuracy.ts; measured in docs/extraction.md). */
+export const modelAccuracySchema = z.object({
+  basis: z.enum(['long-channel', 'fitted', 'table']).describe('long-channel: first-order equations; fitted: short-channel terms fitted to a card; table: characterised from the card'),
+  summary: z.string(),
+});
+export type ModelAccuracy = z.infer<typeof modelAccuracySchema>;
+
 /** What every compute answer says about how it was made. */
 export const resultContext = {
+  accuracy: modelAccuracySchema.optional().describe('How far this model is known to be off (absent in results of engine 1.x)'),
   engineVersion: z.string(),
   polarity: polaritySchema,
   flavour: z.string().optional(),
