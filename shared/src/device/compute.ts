@@ -9,7 +9,8 @@ import type { CurrentModel } from './drain-current.js';
 import { ENGINE_VERSION } from './engine-version.js';
 import { EngineError, isEngineError } from './errors.js';
 import { parseOrThrow } from './parse-request.js';
-import { prepareDevice } from './resolve-device.js';
+import { modelAccuracyOf } from './model-accuracy.js';
+import { deviceParamsOf, prepareDevice } from './resolve-device.js';
 import { regionOf } from './small-signal.js';
 import { type Sizing, solveSize } from './solve.js';
 import { type SweepColumns, sweep } from './sweep.js';
@@ -35,17 +36,18 @@ function resolveProcess(inline: Process | undefined, given: Process | undefined)
   return inline;
 }
 
-function context(polarity: Polarity, flavour: string | undefined, model: CurrentModel) {
-  return { engineVersion: ENGINE_VERSION, polarity, ...(flavour === undefined ? {} : { flavour }), model };
+function context(process: Process, polarity: Polarity, flavour: string | undefined, model: CurrentModel) {
+  const accuracy = modelAccuracyOf(model, deviceParamsOf(process, polarity, flavour));
+  return { engineVersion: ENGINE_VERSION, polarity, ...(flavour === undefined ? {} : { flavour }), model, accuracy };
 }
 
 function sizeResponse(process: Process, sizing: Sizing, polarity: Polarity, flavour: string | undefined, model: CurrentModel, corner: string, temperature: number): SizeResponse {
-  return { ...sizing, ...context(polarity, flavour, model), corner, temperature, ztcVgs: ztcVgsOf(process, sizing, polarity, flavour, model, corner, temperature) };
+  return { ...sizing, ...context(process, polarity, flavour, model), corner, temperature, ztcVgs: ztcVgsOf(process, sizing, polarity, flavour, model, corner, temperature) };
 }
 
 function ztcVgsOf(process: Process, sizing: Sizing, polarity: Polarity, flavour: string | undefined, model: CurrentModel, corner: string, temperature: number): number | null {
   try {
-    return zeroTemperatureCoefficientVgs(process, { polarity, flavour, corner, model, w: sizing.w, l: sizing.l, vds: sizing.vds, vsb: sizing.vsb }, temperature).vgs;
+    return zeroTemperatureCoefficientVgs(process, { polarity, flavour, corner, model, w: sizing.w, l: sizing.l, fingers: sizing.fingers, vds: sizing.vds, vsb: sizing.vsb }, temperature).vgs;
   } catch (error) {
     if (isEngineError(error)) return null;
     throw error;
@@ -68,7 +70,7 @@ function runSweep(request: SweepRequestInput, process?: Process) {
   checkRequestAgainstProcess(parsed, resolved);
   const result = sweep(parsed, resolved);
   const base = sizeResponse(resolved, result.base, parsed.polarity, parsed.flavour, parsed.model, parsed.corner, parsed.temperature ?? resolved.tnom);
-  const head = { ...context(parsed.polarity, parsed.flavour, parsed.model), param: result.param, hold: result.hold, fields: [...result.fields], base };
+  const head = { ...context(resolved, parsed.polarity, parsed.flavour, parsed.model), param: result.param, hold: result.hold, fields: [...result.fields], base };
   return { result, head };
 }
 
@@ -114,5 +116,5 @@ export function computeCorners(request: CornersRequestInput, process?: Process):
   const resolved = resolveProcess(parsed.process, process);
   checkRequestAgainstProcess(parsed, resolved);
   const analysis = cornerAnalysis(parsed, resolved);
-  return { ...context(parsed.polarity, parsed.flavour, parsed.model), bias: parsed.bias, ...analysis };
+  return { ...context(resolved, parsed.polarity, parsed.flavour, parsed.model), bias: parsed.bias, ...analysis };
 }
