@@ -39,10 +39,11 @@ export function toVersionSummary(version: ProcessVersionEntity, users: UserCards
     message: version.message,
     author: toUserRef(version.authorId === null ? null : users.get(version.authorId)),
     createdAt: version.createdAt.toISOString(),
+    modelCardSha256: null,
   };
 }
 
 /** A profile with one version in full. */
 export function toProfile(profile: ProcessProfileEntity, latest: ProcessVersionEntity, shown: ProcessVersionEntity, users: UserCards): ProcessProfile {
-  return { ...toProfileSummary(profile, latest, users), version: { ...toVersionSummary(shown, users), definition: definitionOf(shown) } };
+  return { ...toProfileSummary(profile, latest, users), version: { ...toVersionSummary(shown, users), definition: definitionOf(shown), modelCard: null } };
 }
