@@ -105,10 +105,10 @@ export {
   checkTableGrid,
   checkLookupTable,
 } from './lookup-table.js';
-export { encodeTable, decodeTable } from './table-codec.js';
+export { encodeTable, encodeTableInSteps, decodeTable } from './table-codec.js';
 export { type DefaultGridInputs, defaultTableGrid } from './default-table-grid.js';
 export { MonotoneCubic, monotoneCubicAt } from './monotone-cubic.js';
-export { type PreparedTable, type TableConditions, TableLine, prepareTable, tableLine } from './table-lookup.js';
+export { type PreparedTable, type TableConditions, TableLine, prepareTable, prepareTableInSteps, tableLine } from './table-lookup.js';
 export { type TableOperatingPoint, operatingPointOnLine, tableOperatingPoint } from './table-operating-point.js';
 export { type TableSizeTarget, type TableSizing, sizeFromTable, vgsForGmId, vgsForOverdrive, vgsForCurrentDensity } from './table-sizing.js';
 
