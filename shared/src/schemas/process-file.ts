@@ -33,6 +33,14 @@ export const importProcessFieldsSchema = z
   });
 export type ImportProcessFields = z.infer<typeof importProcessFieldsSchema>;
 
+/** The text fields of POST /api/processes/model-cards/check (multipart, beside the card `file`): the version whose corners and flavours the mapping is for. */
+export const modelCardCheckFieldsSchema = z.strictObject({
+  profileId: z.string().trim().min(1, 'profileId must not be empty'),
+  version: versionNumberText('version').optional().describe('The latest version when absent'),
+  mapping: modelCardMappingTextSchema.optional().describe('JSON text of a mapping to check; guessed from the names when absent'),
+});
+export type ModelCardCheckFields = z.infer<typeof modelCardCheckFieldsSchema>;
+
 export const PROCESS_FILE_FORMAT = 'channelwright-process';
 export const PROCESS_FILE_SCHEMA_VERSION = 1;
 

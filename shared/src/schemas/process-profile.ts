@@ -92,10 +92,10 @@ export type ProcessVersion = z.infer<typeof processVersionSchema>;
 export const processProfileSchema = processProfileSummarySchema.extend({ version: processVersionSchema });
 export type ProcessProfile = z.infer<typeof processProfileSchema>;
 
-/** One difference between two versions, by dotted path: "nmos.kp", "corners.FF.pmos.dvt", "flavours.native.params.vt0". */
+/** One difference between two versions, by dotted path: "nmos.kp", "corners.FF.pmos.dvt", "flavours.native.params.vt0", "modelCard.sha256", "modelCard.corners.TT", "modelCard.devices.bfn18". */
 export const parameterChangeSchema = z.object({
   path: z.string(),
-  group: z.enum(['process', 'nmos', 'pmos', 'corners', 'flavours']),
+  group: z.enum(['process', 'nmos', 'pmos', 'corners', 'flavours', 'modelCard']),
   kind: z.enum(['changed', 'added', 'removed']),
   /** SI unit of the values ('' for plain numbers and text). */
   unit: z.string(),
