@@ -85,6 +85,7 @@ export const characterisationJobSchema = z.object({
   progress: z.object({ done: z.number().int(), total: z.number().int() }).describe('Grid points simulated and in all'),
   etaSeconds: z.number().nullable().describe('Estimated seconds to go while running; null when not known (queued, finished, or too early to tell)'),
   error: z.object({ code: z.string(), message: z.string() }).nullable().describe('Why a job failed, with the simulator\'s message; why it was cancelled'),
+  cancelRequested: z.boolean().describe('A cancel was asked for and the server running the job has not stopped it yet'),
   engine: z.enum(['native', 'wasm']).nullable().describe('native: Debian\'s ngspice; wasm: ngspice compiled to WebAssembly; null until it runs'),
   gridHash: z.string().describe('SHA-256 of the resolved grids: the same version and grid are characterised once'),
   devices: z.array(characterisedDeviceSchema),
