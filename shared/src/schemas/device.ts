@@ -39,6 +39,7 @@ export const STALE_REASONS = ['engine', 'process', 'table'] as const;
 export const staleReasonSchema = z
   .enum(STALE_REASONS)
   .describe('engine: made by another ENGINE_VERSION; process: made on another process version than the sheet\'s; table: model table, made from another table than the version\'s current one for the device (or waiting for a table that now exists)');
+export type StaleReason = z.infer<typeof staleReasonSchema>;
 
 export const deviceSchema = z.object({
   id: z.string(),
