@@ -102,6 +102,8 @@ export {
   tablePointCount,
   lineOffset,
   vgsOfNode,
+  widthScale,
+  widthForScale,
   checkTableGrid,
   checkLookupTable,
 } from './lookup-table.js';

@@ -4,6 +4,7 @@ import { type CornerAnalysis, type CornerPoint, extremesOf } from './corners.js'
 import { EngineError, isEngineError } from './errors.js';
 import { prepareDevice } from './resolve-device.js';
 import { say } from './say.js';
+import { widthScale } from './lookup-table.js';
 import { tableFigures } from './table-figures.js';
 import { tableLine } from './table-lookup.js';
 import { operatingPointOnLine } from './table-operating-point.js';
@@ -28,7 +29,7 @@ export function cornersWithTable(request: CornersRequest, process: Process, choi
       const device = prepareDevice(process, request.polarity, { corner, temperature, flavour: request.flavour, cornerField: request.corners ? `corners.${index}` : 'corner' });
       try {
         const line = tableLine(choice.prepared, { corner, temperature, l: request.l, vds: request.vds, vsb: request.vsb });
-        const vgs = request.bias === 'current' ? vgsForCurrentDensity(line, ((request.id as number) / request.w) * grid.referenceWidth, 'id') : (request.vgs as number);
+        const vgs = request.bias === 'current' ? vgsForCurrentDensity(line, (request.id as number) / widthScale(grid, request.w), 'id') : (request.vgs as number);
         const { point } = tableFigures(operatingPointOnLine(line, request.w, vgs), line, device, choice.prepared);
         const warnings = tableWarnings(device, point, line);
         if (request.w < device.params.wmin) warnings.push({ code: 'W_BELOW_WMIN', message: `W = ${say(request.w, 'm')} is below wmin = ${say(device.params.wmin, 'm')}` });

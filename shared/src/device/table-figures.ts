@@ -1,7 +1,7 @@
 import { junctionCapacitance } from './capacitance.js';
 import { isEngineError } from './errors.js';
 import { type Leakage, leakage } from './leakage.js';
-import { vgsOfNode } from './lookup-table.js';
+import { vgsOfNode, widthScale } from './lookup-table.js';
 import { pairMismatch } from './mismatch.js';
 import type { OperatingPoint } from './operating-point.js';
 import type { PreparedDevice } from './resolve-device.js';
@@ -102,7 +102,7 @@ function offState(prepared: PreparedTable, op: TableOperatingPoint, device: Prep
     const line = tableLine(prepared, { corner: op.corner, temperature: op.temperature, l: op.l, vds: device.vdd, vsb: 0 });
     line.checkVgs(0, 'vgs');
     line.checkVgs(device.vdd, 'vgs');
-    const scale = op.w / prepared.grid.referenceWidth;
+    const scale = widthScale(prepared.grid, op.w);
     const idAtZeroVgs = line.valueAt('id', 0) * scale;
     const ion = line.valueAt('id', device.vdd) * scale;
     const conductsAtZeroVgs = line.valueAt('vt', 0) < 0;

@@ -1,5 +1,5 @@
 import { EngineError } from './errors.js';
-import type { TableWarning } from './lookup-table.js';
+import { type TableWarning, widthScale } from './lookup-table.js';
 import { type PreparedTable, type TableConditions, type TableLine, tableLine } from './table-lookup.js';
 
 /** A device's operating point from a table, SI units, polarity-normalised voltages and positive currents. */
@@ -30,11 +30,11 @@ export interface TableOperatingPoint extends TableConditions {
   warnings: TableWarning[];
 }
 
-/** The operating point of a device of width w at vgs on a table line: currents, conductances and capacitances scale with w / referenceWidth. */
+/** The operating point of a device of width w at vgs on a table line: currents, conductances and capacitances scale with the effective width (widthScale). */
 export function operatingPointOnLine(line: TableLine, w: number, vgs: number): TableOperatingPoint {
   if (!(w > 0) || !Number.isFinite(w)) throw new EngineError('VALIDATION_FAILED', 'W must be a positive width', 'w');
   line.checkVgs(vgs, 'vgs');
-  const scale = w / line.grid.referenceWidth;
+  const scale = widthScale(line.grid, w);
   const id = line.valueAt('id', vgs) * scale;
   const gm = line.valueAt('gm', vgs) * scale;
   const gds = line.valueAt('gds', vgs) * scale;

@@ -1,5 +1,5 @@
 import { EngineError } from './errors.js';
-import { vgsOfNode } from './lookup-table.js';
+import { vgsOfNode, widthForScale, widthScale } from './lookup-table.js';
 import { say, sayGmId } from './say.js';
 import { type Constraint, constraintOf, MAX_WIDTH } from './solve.js';
 import { type PreparedTable, type TableConditions, type TableLine, tableLine } from './table-lookup.js';
@@ -35,16 +35,15 @@ export function sizeFromTable(prepared: PreparedTable, target: TableSizeTarget):
     throw new EngineError('VALIDATION_FAILED', `${constraint} must be a positive number`, constraint);
   }
   const line = tableLine(prepared, target);
-  const reference = line.grid.referenceWidth;
   let vgs: number;
   let w: number;
   if (constraint === 'w') {
     w = value;
-    vgs = vgsForCurrentDensity(line, (id / w) * reference, 'w');
+    vgs = vgsForCurrentDensity(line, id / widthScale(line.grid, w), 'w');
   } else {
     vgs = constraint === 'gmId' ? vgsForGmId(line, value) : constraint === 'vov' ? vgsForOverdrive(line, value) : value;
     line.checkVgs(vgs, constraint);
-    w = (id / line.valueAt('id', vgs)) * reference;
+    w = widthForScale(line.grid, id / line.valueAt('id', vgs));
   }
   if (!(w <= MAX_WIDTH)) {
     throw new EngineError('W_TOO_LARGE', `This target needs W = ${say(w, 'm')}, more than ${say(MAX_WIDTH, 'm')}; raise the overdrive or lower gm/ID`, constraint);

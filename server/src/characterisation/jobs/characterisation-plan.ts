@@ -50,7 +50,8 @@ export function planCharacterisation(definition: Process, card: ModelCard, mappi
     const entry = mapping.devices.find((d) => d.polarity === device.polarity && d.flavour === device.flavour);
     const label = device.flavour === undefined ? device.polarity.toUpperCase() : `${device.polarity.toUpperCase()} ${device.flavour}`;
     if (!entry) throw new DomainError('DEVICE_NOT_IN_CARD', `The model card maps no model to ${label}`, 400, `devices.${index}`);
-    const levels = card.sections.flatMap((section) => section.models.filter((m) => m.name === entry.model).map((m) => m.level));
+    const statements = card.sections.flatMap((section) => section.models.filter((m) => m.name === entry.model));
+    const levels = statements.map((m) => m.level);
     if (levels.some((level) => !CHARACTERISED_LEVELS.has(level))) {
       throw new DomainError('LEVEL_NOT_CHARACTERISED', `Model ${entry.model} (${label}) is level ${levels.find((l) => !CHARACTERISED_LEVELS.has(l))}: tables are characterised from BSIM3 (level 8, 49) and BSIM4 (level 14, 54) models; levels 1–3 are the long-channel models the analytic engine covers`, 400, `devices.${index}`);
     }
@@ -59,7 +60,9 @@ export function planCharacterisation(definition: Process, card: ModelCard, mappi
     const vgsFrom = grid.vgsFrom ?? (params.vt0 < 0 ? Math.floor((params.vt0 - DEPLETION_MARGIN) / step) * step : 0);
     const base = defaultTableGrid({ polarity: device.polarity, modelName: entry.model, vdd, lmin: params.lmin, corners, temperatures, referenceWidth: grid.referenceWidth, vgsStep: step, vgsFrom: Number(vgsFrom.toPrecision(12)) });
     const sorted = (values: number[] | undefined, fallback: number[]) => (values ? [...values].sort((a, b) => a - b) : fallback);
-    const planned: TableGrid = { ...base, lengths: sorted(grid.lengths, base.lengths), vds: sorted(grid.vds, base.vds), vsb: sorted(grid.vsb, base.vsb) };
+    // BSIM3 and BSIM4 narrow the drawn width by 2·wint on each device: the table scales with the effective width.
+    const wint = statements.reduce((sum, m) => sum + (m.parameters.wint ?? 0), 0) / statements.length;
+    const planned: TableGrid = { ...base, lengths: sorted(grid.lengths, base.lengths), vds: sorted(grid.vds, base.vds), vsb: sorted(grid.vsb, base.vsb), widthOffset: Number((2 * wint).toPrecision(12)) };
     const short = planned.lengths.findIndex((l) => l < params.lmin * (1 - 1e-9));
     if (short >= 0) throw gridInvalid('grid.lengths', `L = ${planned.lengths[short]} m is below the lmin of ${label} (${params.lmin} m)`);
     try {
