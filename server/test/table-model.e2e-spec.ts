@@ -68,7 +68,8 @@ describeWithNgspice('the table model of the demo process against native ngspice'
         }
         const sized = sizeResponseSchema.parse(response.body);
         const model = models.get(sized.flavour === 'native' ? 'bfn18na' : sized.polarity === 'nmos' ? 'bfn18' : 'bfp18') as ModelStatement;
-        const check = buildOperatingPointNetlist([{ model, w: sized.w, l: sized.l, vgs: sized.vgs, vds: sized.vds, vsb: sized.vsb }], sized.temperature, randomUUID());
+        // The drawn device: its fingers in parallel, each losing the card's ΔW.
+        const check = buildOperatingPointNetlist([{ model, w: sized.w, fingers: sized.fingers, l: sized.l, vgs: sized.vgs, vds: sized.vds, vsb: sized.vsb }], sized.temperature, randomUUID());
         const result = await pool.run({ engine: 'native', netlist: check.netlist, nonce: check.nonce, vectors: check.vectors, timeoutMs: 60_000 });
         const id = -(sized.polarity === 'nmos' ? 1 : -1) * result.data[0];
         const grid = lengths.get(`${sized.polarity}/${sized.flavour ?? ''}`) ?? [];
@@ -78,7 +79,7 @@ describeWithNgspice('the table model of the demo process against native ngspice'
       await pool.destroy();
     }
     // The figures for docs/characterisation.md; the assertions are below.
-    console.log(JSON.stringify({ refused, checked: checked.map((c) => ({ name: c.name, L_um: c.sized.l * 1e6, onGrid: c.onGrid, W_um: +(c.sized.w * 1e6).toFixed(3), gmId: +c.sized.gmId.toFixed(2), ID_err_pct: +(100 * (c.simulated.id / c.sized.id - 1)).toFixed(3), gmId_err_pct: +(100 * (c.simulated.gmId / c.sized.gmId - 1)).toFixed(3) })) }));
+    console.log(JSON.stringify({ refused, checked: checked.map((c) => ({ name: c.name, L_um: c.sized.l * 1e6, onGrid: c.onGrid, W_um: +(c.sized.w * 1e6).toFixed(3), fingers: c.sized.fingers, gmId: +c.sized.gmId.toFixed(2), ID_err_pct: +(100 * (c.simulated.id / c.sized.id - 1)).toFixed(3), gmId_err_pct: +(100 * (c.simulated.gmId / c.sized.gmId - 1)).toFixed(3) })) }));
   }, 300_000);
   afterAll(() => t?.close());
 

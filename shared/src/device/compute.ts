@@ -7,7 +7,7 @@ import type { Model } from '../schemas/request-fields.js';
 import { compareResults } from './compare-results.js';
 import { cornersWithTable } from './table-corners.js';
 import { sizeWithTable } from './table-size.js';
-import { type TableSource, tableOf } from './table-source.js';
+import { TABLE_ACCURACY, type TableSource, tableOf } from './table-source.js';
 import { sweepWithTable } from './table-sweep.js';
 import { checkRequestAgainstProcess } from './check-request.js';
 import { cornerAnalysis } from './corners.js';
@@ -15,7 +15,8 @@ import type { CurrentModel } from './drain-current.js';
 import { ENGINE_VERSION } from './engine-version.js';
 import { EngineError, isEngineError } from './errors.js';
 import { parseOrThrow } from './parse-request.js';
-import { prepareDevice } from './resolve-device.js';
+import { modelAccuracyOf } from './model-accuracy.js';
+import { deviceParamsOf, prepareDevice } from './resolve-device.js';
 import { regionOf } from './small-signal.js';
 import { type Sizing, solveSize } from './solve.js';
 import { type SweepColumns, sweep } from './sweep.js';
@@ -42,17 +43,18 @@ function resolveProcess(inline: Process | undefined, given: Process | undefined)
   return inline;
 }
 
-function context(polarity: Polarity, flavour: string | undefined, model: Model) {
-  return { engineVersion: ENGINE_VERSION, polarity, ...(flavour === undefined ? {} : { flavour }), model };
+function context(process: Process, polarity: Polarity, flavour: string | undefined, model: Model) {
+  const accuracy = model === 'table' ? TABLE_ACCURACY : modelAccuracyOf(model, deviceParamsOf(process, polarity, flavour));
+  return { engineVersion: ENGINE_VERSION, polarity, ...(flavour === undefined ? {} : { flavour }), model, accuracy };
 }
 
 function sizeResponse(process: Process, sizing: Sizing, polarity: Polarity, flavour: string | undefined, model: CurrentModel, corner: string, temperature: number): SizeResponse {
-  return { ...sizing, ...context(polarity, flavour, model), corner, temperature, ztcVgs: ztcVgsOf(process, sizing, polarity, flavour, model, corner, temperature) };
+  return { ...sizing, ...context(process, polarity, flavour, model), corner, temperature, ztcVgs: ztcVgsOf(process, sizing, polarity, flavour, model, corner, temperature) };
 }
 
 function ztcVgsOf(process: Process, sizing: Sizing, polarity: Polarity, flavour: string | undefined, model: CurrentModel, corner: string, temperature: number): number | null {
   try {
-    return zeroTemperatureCoefficientVgs(process, { polarity, flavour, corner, model, w: sizing.w, l: sizing.l, vds: sizing.vds, vsb: sizing.vsb }, temperature).vgs;
+    return zeroTemperatureCoefficientVgs(process, { polarity, flavour, corner, model, w: sizing.w, l: sizing.l, fingers: sizing.fingers, vds: sizing.vds, vsb: sizing.vsb }, temperature).vgs;
   } catch (error) {
     if (isEngineError(error)) return null;
     throw error;
@@ -79,7 +81,7 @@ function sizeWith(parsed: SizeRequest, model: Model, resolved: Process, tables: 
 function runSweep(parsed: SweepRequest & { model: CurrentModel }, resolved: Process) {
   const result = sweep(parsed, resolved);
   const base = sizeResponse(resolved, result.base, parsed.polarity, parsed.flavour, parsed.model, parsed.corner, parsed.temperature ?? resolved.tnom);
-  const head = { ...context(parsed.polarity, parsed.flavour, parsed.model), param: result.param, hold: result.hold, fields: [...result.fields], base };
+  const head = { ...context(resolved, parsed.polarity, parsed.flavour, parsed.model), param: result.param, hold: result.hold, fields: [...result.fields], base };
   return { result, head };
 }
 
@@ -130,8 +132,8 @@ export function computeCorners(request: CornersRequestInput, process?: Process, 
   checkRequestAgainstProcess(parsed, resolved);
   if (parsed.model === 'table') {
     const choice = tableOf(tables, parsed.polarity, parsed.flavour);
-    return { ...context(parsed.polarity, parsed.flavour, 'table'), table: choice.ref, bias: parsed.bias, ...cornersWithTable(parsed, resolved, choice) };
+    return { ...context(resolved, parsed.polarity, parsed.flavour, 'table'), table: choice.ref, bias: parsed.bias, ...cornersWithTable(parsed, resolved, choice) };
   }
   const analysis = cornerAnalysis({ ...parsed, model: parsed.model }, resolved);
-  return { ...context(parsed.polarity, parsed.flavour, parsed.model), bias: parsed.bias, ...analysis };
+  return { ...context(resolved, parsed.polarity, parsed.flavour, parsed.model), bias: parsed.bias, ...analysis };
 }

@@ -52,6 +52,8 @@ export interface TableGrid {
    * widthOffset) times the table's current. Absent: 0 (scaling with W itself).
    */
   widthOffset?: number;
+  /** The card's length reduction 2·lint, m (Leff = L − lengthOffset), for the effective length a result shows. Absent: 0. */
+  lengthOffset?: number;
   lengths: number[];
   vgs: VgsAxis;
   vds: number[];
@@ -69,17 +71,20 @@ export interface LookupTable {
   columns: Record<TableField, Float32Array | Float64Array>;
 }
 
-/** How many times the reference device's current a device of drawn width w carries: (w − widthOffset)/(referenceWidth − widthOffset). */
-export function widthScale(grid: Pick<TableGrid, 'referenceWidth' | 'widthOffset'>, w: number): number {
+/**
+ * How many times the reference device's current a device of drawn width w (all fingers) carries: each finger loses the
+ * width offset, so (w − fingers·widthOffset)/(referenceWidth − widthOffset).
+ */
+export function widthScale(grid: Pick<TableGrid, 'referenceWidth' | 'widthOffset'>, w: number, fingers = 1): number {
   const offset = grid.widthOffset ?? 0;
-  if (!(w > offset)) throw new EngineError('VALIDATION_FAILED', `W must be wider than the card's width reduction ${offset} m`, 'w');
-  return (w - offset) / (grid.referenceWidth - offset);
+  if (!(w > fingers * offset)) throw new EngineError('VALIDATION_FAILED', `W must be wider than the card's width reduction ${offset} m per finger`, 'w');
+  return (w - fingers * offset) / (grid.referenceWidth - offset);
 }
 
-/** The drawn width that carries `ratio` times the reference device's current (the inverse of widthScale). */
-export function widthForScale(grid: Pick<TableGrid, 'referenceWidth' | 'widthOffset'>, ratio: number): number {
+/** The drawn width (all fingers) that carries `ratio` times the reference device's current (the inverse of widthScale). */
+export function widthForScale(grid: Pick<TableGrid, 'referenceWidth' | 'widthOffset'>, ratio: number, fingers = 1): number {
   const offset = grid.widthOffset ?? 0;
-  return offset + ratio * (grid.referenceWidth - offset);
+  return fingers * offset + ratio * (grid.referenceWidth - offset);
 }
 
 /** How many points a grid holds. */

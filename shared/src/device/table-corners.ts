@@ -29,8 +29,9 @@ export function cornersWithTable(request: CornersRequest, process: Process, choi
       const device = prepareDevice(process, request.polarity, { corner, temperature, flavour: request.flavour, cornerField: request.corners ? `corners.${index}` : 'corner' });
       try {
         const line = tableLine(choice.prepared, { corner, temperature, l: request.l, vds: request.vds, vsb: request.vsb });
-        const vgs = request.bias === 'current' ? vgsForCurrentDensity(line, (request.id as number) / widthScale(grid, request.w), 'id') : (request.vgs as number);
-        const { point } = tableFigures(operatingPointOnLine(line, request.w, vgs), line, device, choice.prepared);
+        const fingers = request.fingers ?? 1;
+        const vgs = request.bias === 'current' ? vgsForCurrentDensity(line, (request.id as number) / widthScale(grid, request.w, fingers), 'id') : (request.vgs as number);
+        const { point } = tableFigures(operatingPointOnLine(line, request.w, vgs, fingers), line, device, choice.prepared);
         const warnings = tableWarnings(device, point, line);
         if (request.w < device.params.wmin) warnings.push({ code: 'W_BELOW_WMIN', message: `W = ${say(request.w, 'm')} is below wmin = ${say(device.params.wmin, 'm')}` });
         points.push({ corner, temperature, op: point, warnings });

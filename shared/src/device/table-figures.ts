@@ -48,18 +48,22 @@ export function gmIdPeakOf(line: TableLine): { gmId: number; node: number } {
  *   strong-inversion side of the peak, 0 below it;
  * - analytic (TABLE_ANALYTIC_FIGURES): the rest.
  */
-export function tableFigures(op: TableOperatingPoint, line: TableLine, device: PreparedDevice, prepared: PreparedTable, options: { offState?: boolean } = {}): TableFigures {
+export function tableFigures(op: TableOperatingPoint, line: TableLine, device: PreparedDevice, prepared: PreparedTable, options: { extras?: boolean } = {}): TableFigures {
   const { params, ut } = device;
   const { w, l, vgs, vds, gm, gds, id, gmId } = op;
   const peak = gmIdPeakOf(line);
   const ratio = peak.gmId / gmId;
   const ic = vgs > vgsOfNode(line.grid.vgs, peak.node) ? ratio * (ratio - 1) : 0;
   const junction = junctionCapacitance(w, params.ldiff, params.cj, params.cjsw);
-  // A sweep that does not ask for the off current skips its second lookup.
-  const off = options.offState === false ? { leakage: leakage(device, w, l), fromTable: false } : offState(prepared, op, device);
+  // A sweep that does not ask for them skips the lookups of the off state and of DIBL.
+  const extras = options.extras !== false;
+  const off = extras ? offState(prepared, op, device) : { leakage: leakage(device, w, l), fromTable: false };
   const point: OperatingPoint = {
     w,
     l,
+    weff: w - op.fingers * (line.grid.widthOffset ?? 0),
+    leff: l - (line.grid.lengthOffset ?? 0),
+    eta: extras ? diblOf(prepared, op) : Number.NaN,
     wOverL: w / l,
     vgs,
     vds,
@@ -83,6 +87,8 @@ export function tableFigures(op: TableOperatingPoint, line: TableLine, device: P
     saturated: vds >= op.vdsat,
     cgs: op.cgs,
     cgd: op.cgd,
+    cgb: op.cgb,
+    cgg: op.cgg,
     cdb: junction,
     csb: junction,
     ft: op.ft,
@@ -95,6 +101,17 @@ export function tableFigures(op: TableOperatingPoint, line: TableLine, device: P
   return { point, analyticFigures: off.fromTable ? [...TABLE_ANALYTIC_FIGURES] : [...TABLE_ANALYTIC_FIGURES, ...OFF_STATE_FIGURES] };
 }
 
+/**
+ * The DIBL coefficient η = −ΔVT/ΔVDS between the table's lowest and highest VDS at the device's L, VSB, corner and
+ * temperature (the simulator's VT does not depend on VGS, so it is read at the device's VGS); 0 with one VDS value.
+ */
+function diblOf(prepared: PreparedTable, op: TableOperatingPoint): number {
+  const { vds } = prepared.grid;
+  if (vds.length < 2) return 0;
+  const at = (value: number) => tableLine(prepared, { corner: op.corner, temperature: op.temperature, l: op.l, vds: value, vsb: op.vsb }).valueAt('vt', op.vgs);
+  return (at(vds[0]) - at(vds[vds.length - 1])) / (vds[vds.length - 1] - vds[0]);
+}
+
 /** Off and on current from the table at VDS = VDD, VSB = 0 (gate and junction leakage analytic); the analytic ones when the table does not reach there. */
 function offState(prepared: PreparedTable, op: TableOperatingPoint, device: PreparedDevice): { leakage: Leakage; fromTable: boolean } {
   const analytic = leakage(device, op.w, op.l);
@@ -102,14 +119,14 @@ function offState(prepared: PreparedTable, op: TableOperatingPoint, device: Prep
     const line = tableLine(prepared, { corner: op.corner, temperature: op.temperature, l: op.l, vds: device.vdd, vsb: 0 });
     line.checkVgs(0, 'vgs');
     line.checkVgs(device.vdd, 'vgs');
-    const scale = widthScale(prepared.grid, op.w);
+    const scale = widthScale(prepared.grid, op.w, op.fingers);
     const idAtZeroVgs = line.valueAt('id', 0) * scale;
     const ion = line.valueAt('id', device.vdd) * scale;
     const conductsAtZeroVgs = line.valueAt('vt', 0) < 0;
     const ioff = conductsAtZeroVgs ? null : idAtZeroVgs + analytic.gate + analytic.junction;
     return {
       fromTable: true,
-      leakage: { ...analytic, conductsAtZeroVgs, idAtZeroVgs, subthreshold: conductsAtZeroVgs ? null : idAtZeroVgs, ioff, ion, ionIoff: ioff !== null && ioff > 0 ? ion / ioff : null },
+      leakage: { ...analytic, conductsAtZeroVgs, idAtZeroVgs, subthreshold: conductsAtZeroVgs ? null : idAtZeroVgs, ioff, ion, ionIoff: ioff !== null && ioff > 0 ? ion / ioff : null, gidl: 0, estimates: ['gate', 'junction'] },
     };
   } catch (error) {
     if (!isEngineError(error)) throw error;

@@ -10,7 +10,7 @@ import { tableFigures, tableZtcVgs } from './table-figures.js';
 import { tableLine } from './table-lookup.js';
 import { operatingPointOnLine } from './table-operating-point.js';
 import { sizeFromTable } from './table-sizing.js';
-import type { TableChoice } from './table-source.js';
+import { TABLE_ACCURACY, type TableChoice } from './table-source.js';
 import { tableWarnings } from './table-warnings.js';
 
 /** A size answer of the table model, without a comparison. */
@@ -31,10 +31,16 @@ export function sizeWithTable(request: SizeRequest, process: Process, choice: Ta
   if (constraint === 'w' && (request.w as number) < params.wmin) {
     throw new EngineError('W_BELOW_WMIN', `W = ${say(request.w as number, 'm')} is below the process minimum wmin = ${say(params.wmin, 'm')}`, 'w');
   }
-  const wRequired = sizeFromTable(prepared, { ...conditions, id: request.id, [constraint]: request[constraint] }).w;
-  const snapped = snapWidth(wRequired, params.wgrid, params.wmin, request.maxFingerWidth ?? DEFAULT_MAX_FINGER_WIDTH);
+  const maxFingerWidth = request.maxFingerWidth ?? DEFAULT_MAX_FINGER_WIDTH;
+  const oneFinger = sizeFromTable(prepared, { ...conditions, id: request.id, [constraint]: request[constraint] }).w;
+  // Split in fingers, each finger loses the card's width reduction: the width grows by it for every finger but the first.
+  const wRequired = constraint === 'w' ? oneFinger : oneFinger + (Math.max(1, Math.ceil(oneFinger / maxFingerWidth - 1e-9)) - 1) * (prepared.grid.widthOffset ?? 0);
+  const snapped = snapWidth(wRequired, params.wgrid, params.wmin, maxFingerWidth);
   const line = tableLine(prepared, conditions);
-  const op = constraint === 'vgs' ? operatingPointOnLine(line, snapped.w, request.vgs as number) : sizeFromTable(prepared, { ...conditions, id: request.id, w: snapped.w });
+  const op =
+    constraint === 'vgs'
+      ? operatingPointOnLine(line, snapped.w, request.vgs as number, snapped.fingers)
+      : sizeFromTable(prepared, { ...conditions, id: request.id, w: snapped.w, fingers: snapped.fingers });
   const { point, analyticFigures } = tableFigures(op, line, device, prepared);
   const warnings = tableWarnings(device, point, line);
   if (snapped.raisedToWmin) {
@@ -51,6 +57,7 @@ export function sizeWithTable(request: SizeRequest, process: Process, choice: Ta
     constraint,
     warnings,
     engineVersion: ENGINE_VERSION,
+    accuracy: TABLE_ACCURACY,
     polarity: request.polarity,
     ...(request.flavour === undefined ? {} : { flavour: request.flavour }),
     model: 'table',

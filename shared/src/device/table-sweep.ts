@@ -11,7 +11,7 @@ import { type TableConditions, type TableLine, tableLine } from './table-lookup.
 import { operatingPointOnLine, type TableOperatingPoint } from './table-operating-point.js';
 import { sizeFromTable, vgsForGmId, vgsForOverdrive } from './table-sizing.js';
 import { sizeWithTable } from './table-size.js';
-import type { TableChoice } from './table-source.js';
+import { TABLE_ACCURACY, type TableChoice } from './table-source.js';
 import { WARNING_THRESHOLDS } from './warnings.js';
 
 const GATE_PARAMS: ReadonlySet<SweepParam> = new Set(['vgs', 'vov', 'gmId']);
@@ -32,6 +32,7 @@ export function sweepWithTable(request: SweepRequest, process: Process, choice: 
   const series = corners.flatMap((corner) => temperatures.map((temperature) => tableSeries(request, process, choice, base, corner, temperature, values, fields)));
   return {
     engineVersion: ENGINE_VERSION,
+    accuracy: TABLE_ACCURACY,
     polarity: request.polarity,
     ...(request.flavour === undefined ? {} : { flavour: request.flavour }),
     model: 'table',
@@ -59,7 +60,7 @@ function tableSeries(
   request: SweepRequest,
   process: Process,
   choice: TableChoice,
-  base: { w: number; vgs: number },
+  base: { w: number; vgs: number; fingers: number },
   corner: string,
   temperature: number | null,
   values: Float64Array,
@@ -70,7 +71,7 @@ function tableSeries(
   const tableWarnings = new Map<WarningCode, Warning>();
   const counts: Counts = { unsaturated: 0, aboveVdd: 0, nearGmIdLimit: 0, narrow: 0, forward: 0, depletion: 0, outside: 0 };
   const constraint = constraintOf(request);
-  const offState = fields.includes('ioff');
+  const extras = fields.includes('ioff');
   const varies = !GATE_PARAMS.has(param);
   let seriesDevice: PreparedDevice | undefined;
   let seriesLine: TableLine | undefined;
@@ -93,7 +94,7 @@ function tableSeries(
       const line = varies || !seriesLine ? tableLine(choice.prepared, conditions) : seriesLine;
       seriesLine ??= line;
       const op = pointOf(request, choice, line, conditions, base, param, value, constraint);
-      const { point } = tableFigures(op, line, device, choice.prepared, { offState });
+      const { point } = tableFigures(op, line, device, choice.prepared, { extras });
       for (const warning of line.warnings) tableWarnings.set(warning.code, warning);
       count(counts, point, device, request.hold === 'id');
       const row: Record<string, number | string | boolean | null> = { [param]: value };
@@ -113,11 +114,11 @@ function tableSeries(
 }
 
 /** The operating point at one point of the series. */
-function pointOf(request: SweepRequest, choice: TableChoice, line: TableLine, conditions: TableConditions, base: { w: number; vgs: number }, param: SweepParam, value: number, constraint: 'vov' | 'gmId' | 'w' | 'vgs'): TableOperatingPoint {
+function pointOf(request: SweepRequest, choice: TableChoice, line: TableLine, conditions: TableConditions, base: { w: number; vgs: number; fingers: number }, param: SweepParam, value: number, constraint: 'vov' | 'gmId' | 'w' | 'vgs'): TableOperatingPoint {
   const gate = GATE_PARAMS.has(param);
   if (request.hold === 'w') {
     const vgs = !gate ? base.vgs : param === 'vgs' ? value : param === 'vov' ? vgsForOverdrive(line, value) : vgsForGmId(line, value);
-    return operatingPointOnLine(line, base.w, vgs);
+    return operatingPointOnLine(line, base.w, vgs, base.fingers);
   }
   const target = gate ? { [param]: value } : { [constraint]: request[constraint] };
   return sizeFromTable(choice.prepared, { ...conditions, id: request.id, ...target });

@@ -13,6 +13,7 @@ export const tableGridSchema = z.object({
   modelName: z.string().describe('The card model it was characterised from'),
   referenceWidth: z.number().describe('Every point was simulated at this W, m; currents, conductances and capacitances scale with the effective width'),
   widthOffset: z.number().optional().describe('The card\'s width reduction 2·wint, m: a device of width W carries (W − widthOffset)/(referenceWidth − widthOffset) times the table\'s current'),
+  lengthOffset: z.number().optional().describe('The card\'s length reduction 2·lint, m: the effective length a result shows is L − lengthOffset'),
   lengths: z.array(z.number()).describe('m'),
   vgs: z.object({ start: z.number(), step: z.number(), count: z.number().int() }).describe('VGS axis: start, start + step, … (count values), V'),
   vds: z.array(z.number()).describe('V'),

@@ -12,7 +12,7 @@ export type SweepParam = (typeof SWEEP_PARAMS)[number];
 /** Operating-point fields a sweep can return (the swept value always comes back under its own name). */
 export const SWEEP_FIELDS = [
   'w', 'l', 'wOverL', 'vgs', 'vds', 'vsb', 'temperature', 'vt', 'vov', 'n', 'vdsat', 'saturated',
-  'id', 'gm', 'gmb', 'gds', 'ro', 'gmId', 'intrinsicGain', 'ic', 'region', 'cgs', 'cgd', 'ft', 'sigmaVt', 'ioff',
+  'id', 'gm', 'gmb', 'gds', 'ro', 'gmId', 'intrinsicGain', 'ic', 'region', 'cgs', 'cgd', 'cgg', 'ft', 'sigmaVt', 'ioff',
 ] as const;
 export type SweepField = (typeof SWEEP_FIELDS)[number];
 

@@ -60,9 +60,10 @@ export function planCharacterisation(definition: Process, card: ModelCard, mappi
     const vgsFrom = grid.vgsFrom ?? (params.vt0 < 0 ? Math.floor((params.vt0 - DEPLETION_MARGIN) / step) * step : 0);
     const base = defaultTableGrid({ polarity: device.polarity, modelName: entry.model, vdd, lmin: params.lmin, corners, temperatures, referenceWidth: grid.referenceWidth, vgsStep: step, vgsFrom: Number(vgsFrom.toPrecision(12)) });
     const sorted = (values: number[] | undefined, fallback: number[]) => (values ? [...values].sort((a, b) => a - b) : fallback);
-    // BSIM3 and BSIM4 narrow the drawn width by 2·wint on each device: the table scales with the effective width.
-    const wint = statements.reduce((sum, m) => sum + (m.parameters.wint ?? 0), 0) / statements.length;
-    const planned: TableGrid = { ...base, lengths: sorted(grid.lengths, base.lengths), vds: sorted(grid.vds, base.vds), vsb: sorted(grid.vsb, base.vsb), widthOffset: Number((2 * wint).toPrecision(12)) };
+    // BSIM3 and BSIM4 narrow the drawn width by 2·wint (per finger) and shorten L by 2·lint: the table scales with the effective width.
+    const mean = (parameter: string) => statements.reduce((sum, m) => sum + (m.parameters[parameter] ?? 0), 0) / statements.length;
+    const offsets = { widthOffset: Number((2 * mean('wint')).toPrecision(12)), lengthOffset: Number((2 * mean('lint')).toPrecision(12)) };
+    const planned: TableGrid = { ...base, lengths: sorted(grid.lengths, base.lengths), vds: sorted(grid.vds, base.vds), vsb: sorted(grid.vsb, base.vsb), ...offsets };
     const short = planned.lengths.findIndex((l) => l < params.lmin * (1 - 1e-9));
     if (short >= 0) throw gridInvalid('grid.lengths', `L = ${planned.lengths[short]} m is below the lmin of ${label} (${params.lmin} m)`);
     try {
