@@ -105,6 +105,15 @@ describe('characterisation jobs', () => {
     expect((await start({ processId: bare.id }).expect(409)).body).toMatchObject({ code: 'PROCESS_HAS_NO_MODEL_CARD', field: 'version' });
   });
 
+  it('lets a characterised profile that no sheet uses be deleted, its jobs and tables with it', async () => {
+    const doomed = await createCardProfile(t, admin, 'T250-deleted');
+    const job = (await start({ processId: doomed.id, devices: [{ polarity: 'nmos' }], grid: SMALL_GRID }).expect(202)).body;
+    expect((await followJob(t, admin, job.id, finished)).at(-1)?.status).toBe('done');
+    await t.http().delete(`/api/processes/${doomed.id}`).set(bearer(admin)).expect(204);
+    expect(await rowsOf(job.id)).toEqual({ tables: 0, chunks: 0 });
+    expect((await t.http().get(`/api/characterisations/${job.id}`).set(bearer(admin)).expect(404)).body.code).toBe('CHARACTERISATION_NOT_FOUND');
+  });
+
   it('lets maintainers start and cancel, readers of the process follow, and nobody else see a job', async () => {
     expect((await start({ processId, grid: SMALL_GRID }, designer).expect(403)).body.code).toBe('NOT_PROCESS_MAINTAINER');
     const job = (await start({ processId, devices: [{ polarity: 'nmos' }], grid: SMALL_GRID }).expect(200)).body;
