@@ -81,6 +81,21 @@ describe('membership, sheet and device changes leave audit rows (and a new membe
     expect((await audit({ action: 'sheet.deleted' })).map((e) => e.entityId)).toEqual([sheet.id]);
   });
 
+  it('writes neither a new version nor an audit row for an edit that changes nothing', async () => {
+    const profileId = (await t.http().get('/api/processes').set(bearer(tokens.designer))).body[0].id;
+    const sheet = await newSheet(t, tokens.designer, projectId, profileId, 'Unchanged sheet');
+    const device = (await t.http().post(`/api/sheets/${sheet.id}/devices`).set(bearer(tokens.designer)).send(nmosTargets({ name: 'MU' })).expect(201)).body;
+    const edits = async () => (await audit({ action: 'device.updated' })).filter((e) => e.entityId === device.id);
+    const onlyVersion = await t.http().patch(`/api/sheets/${sheet.id}/devices/${device.id}`).set(bearer(tokens.designer)).send({ version: device.version }).expect(200);
+    expect(onlyVersion.body.version).toBe(device.version);
+    const sameValue = await t.http().patch(`/api/sheets/${sheet.id}/devices/${device.id}`).set(bearer(tokens.designer)).send({ version: device.version, l: device.targets.l }).expect(200);
+    expect(sameValue.body.version).toBe(device.version);
+    expect(await edits()).toHaveLength(0);
+    // A real change still writes both.
+    await t.http().patch(`/api/sheets/${sheet.id}/devices/${device.id}`).set(bearer(tokens.designer)).send({ version: device.version, l: 2e-6 }).expect(200);
+    expect(await edits()).toHaveLength(1);
+  });
+
   it('refuses to delete a sheet that has revisions (409 SHEET_HAS_REVISIONS) and writes nothing', async () => {
     const profileId = (await t.http().get('/api/processes').set(bearer(tokens.designer))).body[0].id;
     const sheet = await newSheet(t, tokens.designer, projectId, profileId, 'Frozen once');

@@ -95,6 +95,8 @@ describe('POST /api/processes/derive, the physics helper', () => {
       expect(response.body.field).toBe(field);
     };
     await bad({ tox: 0, substrateDoping: 1e23 }, 'tox');
+    await bad({ tox: 1e-300, substrateDoping: 1e23 }, 'tox'); // below one atomic layer: not an oxide
+    await bad({ tox: 'NaN', substrateDoping: 1e23 }, 'tox');
     await bad({ tox: '10n', substrateDoping: 1e23 }, 'tox');
     await bad({ tox: 10e-9 }, 'substrateDoping');
     await bad({ tox: 10e-9, substrateDoping: 1e17 }, 'substrateDoping'); // cm⁻³ by mistake: 1e17 m⁻³ is below the range

@@ -96,6 +96,15 @@ describe('projects and membership', () => {
       expect((await t.http().get(`/api/projects/${created.id}`).set(bearer(tokens.designer))).body).toMatchObject({ name: 'Renamed once', version: 2 });
     });
 
+    it('records the creation and the rename in the project audit trail, and nothing for a refused rename', async () => {
+      const created = (await t.http().post('/api/projects').set(bearer(tokens.designer)).send({ name: 'Audited project' }).expect(201)).body;
+      await t.http().patch(`/api/projects/${created.id}`).set(bearer(tokens.designer)).send({ version: 1, name: 'Audited project, renamed' }).expect(200);
+      await t.http().patch(`/api/projects/${created.id}`).set(bearer(tokens.designer)).send({ version: 1, name: 'Stale' }).expect(409);
+      const events = (await t.http().get(`/api/projects/${created.id}/audit`).query({ entityType: 'project' }).set(bearer(tokens.designer)).expect(200)).body;
+      expect(events.map((e: { action: string }) => e.action)).toEqual(['project.updated', 'project.created']);
+      expect(events[0]).toMatchObject({ before: { name: 'Audited project' }, after: { name: 'Audited project, renamed' }, summary: 'Renamed the project Audited project to Audited project, renamed' });
+    });
+
     it('lets only owners and admins rename: reviewers and viewers get 403', async () => {
       for (const token of [tokens.reviewer, tokens.viewer]) {
         const response = await t.http().patch(`/api/projects/${projectId}`).set(bearer(token)).send({ version: 1, name: 'Not mine' }).expect(403);

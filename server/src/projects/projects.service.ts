@@ -3,6 +3,7 @@ import { Injectable } from '@nestjs/common';
 import { ModuleRef } from '@nestjs/core';
 import { InjectRepository } from '@nestjs/typeorm';
 import { In, type EntityManager, type Repository } from 'typeorm';
+import { AuditService } from '../audit/audit.service.js';
 import { registeredUnder } from '../common/extension-points.js';
 import { UnitOfWork } from '../database/unit-of-work.js';
 import { UsersService } from '../users/users.service.js';
@@ -25,6 +26,7 @@ export class ProjectsService {
     private readonly unitOfWork: UnitOfWork,
     private readonly users: UsersService,
     private readonly moduleRef: ModuleRef,
+    private readonly audit: AuditService,
   ) {}
 
   /** The projects the user is a member of; every project for admins. By name. */
@@ -40,6 +42,15 @@ export class ProjectsService {
     const id = await this.unitOfWork.run(async (manager) => {
       const project = await manager.getRepository(ProjectEntity).save(manager.create(ProjectEntity, { ...request, createdById: creator.id }));
       await manager.getRepository(ProjectMemberEntity).insert({ projectId: project.id, userId: creator.id, role: 'owner' });
+      await this.audit.record(manager, {
+        actor: creator,
+        projectId: project.id,
+        entityType: 'project',
+        entityId: project.id,
+        action: 'project.created',
+        after: { name: project.name, description: project.description },
+        summary: `Created the project ${project.name}`,
+      });
       return project.id;
     });
     return this.get(id, 'owner');
@@ -60,7 +71,17 @@ export class ProjectsService {
       if (!project) throw projectNotFound();
       assertVersion('project', project, request.version);
       const { version: _edited, ...change } = request;
+      const before = { name: project.name, description: project.description };
       await projects.save(Object.assign(project, change, { version: project.version + 1 }));
+      await this.audit.record(manager, {
+        projectId: project.id,
+        entityType: 'project',
+        entityId: project.id,
+        action: 'project.updated',
+        before,
+        after: { name: project.name, description: project.description },
+        summary: before.name === project.name ? `Edited the description of ${project.name}` : `Renamed the project ${before.name} to ${project.name}`,
+      });
     });
     return this.get(access.projectId, access.role);
   }

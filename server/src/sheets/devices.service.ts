@@ -1,3 +1,4 @@
+import { isDeepStrictEqual } from 'node:util';
 import type { Device, DeviceTargets, UpdateDeviceRequest } from '@channelwright/shared/schemas';
 import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
@@ -49,7 +50,7 @@ export class DevicesService {
     });
   }
 
-  /** The targets merged with the change, recomputed; 409 STALE_EDIT (nothing written) when `version` is not the stored one. */
+  /** The targets merged with the change, recomputed (a change that changes nothing writes nothing); 409 STALE_EDIT (nothing written) when `version` is not the stored one. */
   update(sheetId: string, deviceId: string, change: UpdateDeviceRequest): Promise<Device> {
     return this.unitOfWork.run(async (manager) => {
       const loaded = await this.reader.load(sheetId, manager);
@@ -58,6 +59,8 @@ export class DevicesService {
       assertVersion('device', device, change.version);
       const before = targetsOf(device);
       const targets = mergeTargets(before, change);
+      // A change that changes nothing (only `version`, or the values already stored) writes nothing: no new version, no audit row.
+      if (isDeepStrictEqual(withoutUndefined(targets), withoutUndefined(before))) return this.response(manager, sheetId, deviceId);
       if (targets.name !== device.name) assertNameFree(loaded, targets.name);
       const computation = computeDevice(targets, loaded.sheet, loaded.process, await this.tables.sourceFor(loaded.sheet, [targets], manager));
       assertKnownToProcess(computation);
@@ -86,4 +89,9 @@ export class DevicesService {
 
 function assertNameFree(loaded: LoadedSheet, name: string): void {
   if (loaded.devices.some((device) => device.name === name)) throw conflict('DEVICE_NAME_TAKEN', `This sheet already has a device named ${name}`, 'name');
+}
+
+/** The object without its undefined members, so `{ a: undefined }` and `{}` compare equal. */
+function withoutUndefined(value: object): object {
+  return Object.fromEntries(Object.entries(value).filter(([, member]) => member !== undefined));
 }

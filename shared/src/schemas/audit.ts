@@ -7,11 +7,13 @@ import { userRefSchema } from './process-profile.js';
  */
 
 /** The kinds of things events are about. */
-export const AUDIT_ENTITY_TYPES = ['member', 'sheet', 'device', 'revision', 'review-request', 'comment', 'process-profile'] as const;
+export const AUDIT_ENTITY_TYPES = ['project', 'member', 'sheet', 'device', 'revision', 'review-request', 'comment', 'process-profile'] as const;
 export type AuditEntityType = (typeof AUDIT_ENTITY_TYPES)[number];
 
 /** Every action the product records, as `<thing>.<what happened>`. */
 export const AUDIT_ACTIONS = [
+  'project.created',
+  'project.updated',
   'member.added',
   'member.role-changed',
   'member.removed',

@@ -3,7 +3,7 @@ import { z } from 'zod';
 /** POST /api/processes/derive, the physics helper: process parameters from oxide thickness and doping. */
 
 export const deriveProcessRequestSchema = z.strictObject({
-  tox: z.number({ error: 'tox must be a number in m' }).gt(0, 'tox must be above 0 m').max(1e-6, 'tox must be at most 1 µm').describe('Oxide thickness, m'),
+  tox: z.number({ error: 'tox must be a number in m' }).min(1e-10, 'tox must be at least 0.1 nm (thinner than one atomic layer of oxide is not a gate oxide)').max(1e-6, 'tox must be at most 1 µm').describe('Oxide thickness, m'),
   substrateDoping: z
     .number({ error: 'substrateDoping must be a number in m⁻³' })
     .min(1e19, 'substrateDoping must be at least 1e19 m⁻³ (1e13 cm⁻³)')
