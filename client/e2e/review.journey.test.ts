@@ -111,8 +111,9 @@ describeJourney('review and sign-off', (journey) => {
       return { status: response.status, body: await response.json() };
     }, revisionPath);
     expect(refusal).toMatchObject({ status: 409, body: { code: 'REVISION_SIGNED_OFF' } });
-    await page.getByRole('button', { name: 'Verify hash' }).click();
+    // Verified on opening: the stored rows, the stored hash and the signed hash (decision and audit trail) agree.
     await page.getByText('Hash verified').waitFor();
+    await page.getByText('and what the reviewer signed off (decision and audit trail agree)', { exact: false }).waitFor();
     await saveScreenshot(page, 'review-9-designer-revision-signed-off');
     await page.close();
   });

@@ -10,6 +10,9 @@ import {
   type Revision,
   type Sheet,
 } from '@channelwright/shared/schemas';
+import { revisionHash } from '../src/revisions/revision-content.js';
+import { RevisionDeviceEntity } from '../src/revisions/revision-device.entity.js';
+import { RevisionEntity } from '../src/revisions/revision.entity.js';
 import { DEMO_ACCOUNTS } from '../src/seed/demo-accounts.js';
 import { signInEveryone, wrenmoss, type Tokens } from './fixtures/sheets/sheet-fixtures.js';
 import { outboxRows, receivedMail } from './helpers/mail.js';
@@ -255,5 +258,27 @@ describe('review and sign-off: designer → request → reviewer approves → si
       ['revision.created', designer.email],
       ['review.requested', designer.email],
     ]);
+  });
+  // Last in this file: it rewrites the signed-off revision behind the server's back.
+  it('keeps a signed-off revision provable: rows rewritten with a re-computed stored hash, then a rewritten decision, are both caught', async () => {
+    const verify = async () => (await get(`/api/revisions/${r1.id}/verify`, tokens.designer).expect(200)).body;
+    expect(await verify()).toMatchObject({ valid: true, problems: [], signatures: [{ signedHash: r1.hash, auditedHash: r1.hash, matches: true }] });
+
+    // An insider edits a frozen result and re-computes the stored hash so the rows agree with it again.
+    for (const trigger of ['TRG_revision_devices_no_update', 'TRG_revisions_no_update', 'TRG_review_requests_final']) await t.dataSource.query(`DROP TRIGGER IF EXISTS "${trigger}"`);
+    const [row] = await t.dataSource.query(`SELECT "id", "result" FROM "revision_devices" WHERE "revisionId" = ? ORDER BY "position" LIMIT 1`, [r1.id]);
+    await t.dataSource.query(`UPDATE "revision_devices" SET "result" = ? WHERE "id" = ?`, [JSON.stringify({ ...JSON.parse(row.result), w: 9.99e-6 }), row.id]);
+    const revision = await t.dataSource.getRepository(RevisionEntity).findOneByOrFail({ id: r1.id });
+    const rehashed = revisionHash(revision, await t.dataSource.getRepository(RevisionDeviceEntity).findBy({ revisionId: r1.id }));
+    await t.dataSource.query(`UPDATE "revisions" SET "hash" = ? WHERE "id" = ?`, [rehashed, r1.id]);
+    const first = await verify();
+    expect(first).toMatchObject({ valid: false, storedHash: rehashed, computedHash: rehashed, signatures: [{ signedHash: r1.hash, auditedHash: r1.hash, matches: false }] });
+    expect(first.problems).toEqual([expect.stringContaining('differ from what was signed off')]);
+
+    // Rewriting the decision's hash too still leaves the audit trail, which the database keeps append-only.
+    await t.dataSource.query(`UPDATE "review_requests" SET "signedHash" = ? WHERE "revisionId" = ? AND "state" = 'approved'`, [rehashed, r1.id]);
+    const second = await verify();
+    expect(second).toMatchObject({ valid: false, signatures: [{ signedHash: rehashed, auditedHash: r1.hash, matches: false }] });
+    expect(second.problems).toEqual([expect.stringContaining('differs from the one the audit trail recorded')]);
   });
 });

@@ -67,7 +67,7 @@ describe('revisions: freezing a sheet into an immutable, hashed snapshot', () =>
     // SHA-256: FIPS 180-4 (2015); canonical JSON: RFC 8785 (2020).
     expect(createHash('sha256').update(canonicalJson(content)).digest('hex')).toBe(revision.hash);
     const verify = await t.http().get(`/api/revisions/${revision.id}/verify`).set(bearer(tokens.viewer)).expect(200);
-    expect(verify.body).toEqual({ valid: true, algorithm: 'sha-256', storedHash: revision.hash, computedHash: revision.hash });
+    expect(verify.body).toEqual({ valid: true, algorithm: 'sha-256', storedHash: revision.hash, computedHash: revision.hash, signatures: [], problems: [] });
   });
 
   it('numbers the revisions of a sheet r1, r2 … and lists them newest first', async () => {

@@ -1,7 +1,7 @@
-import { auditRangeEnd, auditRangeStart, type AuditEvent, type AuditQuery } from '@channelwright/shared/schemas';
+import { auditRangeEnd, auditRangeStart, type AuditAction, type AuditEvent, type AuditQuery } from '@channelwright/shared/schemas';
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { Brackets, type EntityManager, type Repository } from 'typeorm';
+import { Brackets, In, type EntityManager, type Repository } from 'typeorm';
 import { UsersService, type UserCard } from '../users/users.service.js';
 import { AuditEventEntity } from './audit-event.entity.js';
 import type { AuditRecord } from './audit-record.js';
@@ -21,6 +21,13 @@ export class AuditService {
 
   record(manager: EntityManager, event: AuditRecord): Promise<void> {
     return recordAudit(manager, event);
+  }
+
+  /** What was recorded `after` an action on each of these entities (oldest first), for checks that trust the trail over the tables. */
+  async recordedAfter(action: AuditAction, entityIds: readonly string[], manager: EntityManager = this.events.manager): Promise<Array<{ entityId: string; after: unknown }>> {
+    if (entityIds.length === 0) return [];
+    const rows = await manager.getRepository(AuditEventEntity).find({ where: { action, entityId: In([...entityIds]) }, order: { id: 'ASC' } });
+    return rows.map((row) => ({ entityId: row.entityId, after: row.after === null ? null : JSON.parse(row.after) }));
   }
 
   /**

@@ -51,11 +51,26 @@ export class RevisionsService {
     return toRevision(loaded, await this.reader.devices(id));
   }
 
-  /** Recomputes the hash from the stored rows and compares it with the stored one. */
+  /**
+   * Recomputes the hash from the stored rows and compares it with the stored one and with the hash each
+   * sign-off approved, as its decision holds it and as the audit trail recorded it when it was made.
+   */
   async verify(id: string): Promise<RevisionVerification> {
-    const { revision } = await this.reader.load(id);
+    const loaded = await this.reader.load(id);
+    const { revision } = loaded;
     const computedHash = revisionHash(revision, await this.reader.devices(id));
-    return { valid: computedHash === revision.hash, algorithm: REVISION_HASH_ALGORITHM, storedHash: revision.hash, computedHash };
+    const approved = loaded.requests.filter((request) => request.state === 'approved');
+    const audited = await this.audit.recordedAfter('review.approved', approved.map((request) => request.id));
+    const problems: string[] = [];
+    if (computedHash !== revision.hash) problems.push('The stored rows no longer hash to the hash stored with the revision.');
+    const signatures = approved.map((request) => {
+      const auditedHash = auditedSignedHash(audited.find((event) => event.entityId === request.id)?.after);
+      const matches = request.signedHash === computedHash && auditedHash === computedHash;
+      if (request.signedHash !== computedHash) problems.push(`The stored rows differ from what was signed off (decision ${request.id}).`);
+      if (auditedHash !== request.signedHash) problems.push(`The signed hash of decision ${request.id} differs from the one the audit trail recorded when it was signed.`);
+      return { reviewRequestId: request.id, signedHash: request.signedHash, auditedHash, matches };
+    });
+    return { valid: problems.length === 0, algorithm: REVISION_HASH_ALGORITHM, storedHash: revision.hash, computedHash, signatures, problems };
   }
 
   /** Compares with `againstId`, or with the sheet's latest signed-off revision before this one. */
@@ -104,4 +119,8 @@ export class RevisionsService {
       devices,
     };
   }
+}
+
+function auditedSignedHash(after: unknown): string | null {
+  return typeof after === 'object' && after !== null && 'signedHash' in after && typeof after.signedHash === 'string' ? after.signedHash : null;
 }

@@ -100,11 +100,30 @@ export type Revision = z.infer<typeof revisionSchema>;
 
 export const revisionListSchema = z.array(revisionSummarySchema).describe('Newest first');
 
+/**
+ * One sign-off checked: the hash the reviewer approved, as the decision stored it and as the audit trail
+ * recorded it when they signed; `matches` when both equal the hash recomputed from the stored rows.
+ */
+export const signatureCheckSchema = z.object({
+  reviewRequestId: z.string(),
+  signedHash: z.string().nullable(),
+  auditedHash: z.string().nullable().describe('The hash in the audit row written with the decision; null when the trail holds none'),
+  matches: z.boolean(),
+});
+export type SignatureCheck = z.infer<typeof signatureCheckSchema>;
+
+/**
+ * A revision verified: the hash recomputed from the stored rows against the stored hash and against every
+ * sign-off's hash (decision and audit trail), so rows rewritten together with a re-computed stored hash are
+ * still caught. `valid` only when all agree.
+ */
 export const revisionVerificationSchema = z.object({
   valid: z.boolean(),
   algorithm: z.literal(REVISION_HASH_ALGORITHM),
   storedHash: z.string(),
   computedHash: z.string(),
+  signatures: z.array(signatureCheckSchema),
+  problems: z.array(z.string()).describe('Each disagreement in words; empty when valid'),
 });
 export type RevisionVerification = z.infer<typeof revisionVerificationSchema>;
 

@@ -1,6 +1,7 @@
 import type { Revision } from '@channelwright/shared/schemas';
 import { Alert, Code, Group, Paper, SimpleGrid, Stack, Text } from '@mantine/core';
-import { IconLock, IconRosetteDiscountCheck } from '@tabler/icons-react';
+import { IconAlertOctagon, IconLock, IconRosetteDiscountCheck } from '@tabler/icons-react';
+import { useVerifyRevision } from '../api/verify-revision';
 import { HashCheck } from './hash-check';
 
 const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
@@ -18,8 +19,13 @@ function Fact({ label, children }: { label: string; children: React.ReactNode })
   );
 }
 
-/** What was frozen, by whom, on which numbers, its hash, and the sign-off when there is one. */
+/**
+ * What was frozen, by whom, on which numbers, its hash, and the sign-off when there is one. The hash is
+ * verified on opening; a sign-off whose revision fails verification is flagged, never shown as holding.
+ */
 export function RevisionSummary({ revision }: { revision: Revision }) {
+  const verification = useVerifyRevision(revision.id, true);
+  const broken = verification.data?.valid === false;
   const signOff = revision.signOff;
   return (
     <Stack gap="sm">
@@ -40,7 +46,14 @@ export function RevisionSummary({ revision }: { revision: Revision }) {
           </Fact>
         </SimpleGrid>
       </Paper>
-      {signOff ? (
+      {signOff && broken ? (
+        <Alert color="red" variant="filled" icon={<IconAlertOctagon size={18} />} title="Sign-off does not hold: this revision failed verification" role="alert">
+          <Text size="sm">
+            {signOff.by?.displayName ?? 'A reviewer'} signed off hash <Code>{signOff.hash.slice(0, 16)}…</Code>, but the stored rows no longer match it. Treat this revision
+            as unsigned and tell an administrator.
+          </Text>
+        </Alert>
+      ) : signOff ? (
         <Alert color="green" variant="light" icon={<IconRosetteDiscountCheck size={18} />} title={`Signed off by ${signOff.by?.displayName ?? 'a reviewer'}`}>
           <Stack gap={4}>
             <Text size="sm">
@@ -58,7 +71,7 @@ export function RevisionSummary({ revision }: { revision: Revision }) {
         </Group>
       )}
       <Group>
-        <HashCheck revisionId={revision.id} />
+        <HashCheck verification={verification} />
       </Group>
     </Stack>
   );

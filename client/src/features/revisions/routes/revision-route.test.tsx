@@ -10,8 +10,9 @@ import { HASH_OF_R1, M1, project, reviewRequest, revision } from '../testing/rev
 const LOADED = { timeout: 5000 };
 
 /** The revision routes of the server, in memory: a decision changes what the next reads return. */
-function fakeRevisionServer(me: typeof designer, options: { tampered?: boolean } = {}) {
+function fakeRevisionServer(me: typeof designer, options: { tampered?: boolean; signedOff?: boolean } = {}) {
   let current = revision();
+  if (options.signedOff) current = { ...current, state: 'signed-off', signOff: { reviewRequestId: 'req-1', by: { id: reviewer.id, displayName: reviewer.displayName }, at: '2026-03-01T12:00:00.000Z', hash: HASH_OF_R1 } };
   let request = reviewRequest();
   const comments: RevisionComment[] = [];
   const api = installFakeApi({
@@ -23,9 +24,16 @@ function fakeRevisionServer(me: typeof designer, options: { tampered?: boolean }
     'GET /api/revisions/rev-1/diff': {
       body: { revisionId: 'rev-1', againstId: 'rev-0', againstLabel: 'r0', added: [], removed: [], sheetChanges: [], changed: [{ id: M1.id, name: 'M1', changes: [{ path: 'targets.l', from: 0.36e-6, to: 0.5e-6 }] }] },
     },
-    'GET /api/revisions/rev-1/verify': {
-      body: { valid: !options.tampered, algorithm: 'sha-256', storedHash: HASH_OF_R1, computedHash: options.tampered ? 'b'.repeat(64) : HASH_OF_R1 },
-    },
+    'GET /api/revisions/rev-1/verify': () => ({
+      body: {
+        valid: !options.tampered,
+        algorithm: 'sha-256',
+        storedHash: HASH_OF_R1,
+        computedHash: options.tampered ? 'b'.repeat(64) : HASH_OF_R1,
+        signatures: current.signOff ? [{ reviewRequestId: 'req-1', signedHash: HASH_OF_R1, auditedHash: HASH_OF_R1, matches: !options.tampered }] : [],
+        problems: options.tampered ? ['The stored rows no longer hash to the hash stored with the revision.'] : [],
+      },
+    }),
     'GET /api/revisions/rev-1/comments': () => ({ body: comments }),
     'POST /api/revisions/rev-1/comments': ({ body }) => {
       const { body: text, deviceId } = body as { body: string; deviceId?: string };
@@ -83,11 +91,25 @@ describe('the revision page', () => {
     expect(screen.queryByRole('button', { name: 'Approve and sign off' })).not.toBeInTheDocument();
   });
 
-  it('says so when the stored rows no longer match the hash', async () => {
+  it('verifies the hash on opening, without a button press, and says so when the stored rows no longer match it', async () => {
     fakeRevisionServer(designer, { tampered: true });
-    const { user } = renderApp('/revisions/rev-1', { token: 'token-ines' });
-    await user.click(await screen.findByRole('button', { name: 'Verify hash' }));
-    expect(await screen.findByText('Hash mismatch')).toBeInTheDocument();
+    renderApp('/revisions/rev-1', { token: 'token-ines' });
+    expect(await screen.findByText('Hash mismatch', {}, LOADED)).toBeInTheDocument();
     expect(screen.getByText('b'.repeat(64))).toBeInTheDocument();
+    expect(screen.getByText('The stored rows no longer hash to the hash stored with the revision.')).toBeInTheDocument();
+  });
+
+  it('flags a signed-off revision that fails verification instead of showing its sign-off', async () => {
+    fakeRevisionServer(designer, { tampered: true, signedOff: true });
+    renderApp('/revisions/rev-1', { token: 'token-ines' });
+    expect(await screen.findByText('Sign-off does not hold: this revision failed verification', {}, LOADED)).toBeInTheDocument();
+    expect(screen.queryByText(`Signed off by ${reviewer.displayName}`)).not.toBeInTheDocument();
+  });
+
+  it('shows a signed-off revision that verifies as signed off, with the hash verified', async () => {
+    fakeRevisionServer(designer, { signedOff: true });
+    renderApp('/revisions/rev-1', { token: 'token-ines' });
+    expect(await screen.findByText('Hash verified', {}, LOADED)).toBeInTheDocument();
+    expect(screen.getByText(`Signed off by ${reviewer.displayName}`)).toBeInTheDocument();
   });
 });
