@@ -133,6 +133,16 @@ describe('sign-in over HTTP', () => {
     await t.http().get('/api/auth/me').set(bearer(accessToken)).expect(200);
   });
 
+  it('applies a role change to the very next request of a token already in use (the account read is reused only until a change)', async () => {
+    const { accessToken, user } = await t.register({ email: 'promoted@marsh.example', displayName: 'Promoted Soon', password: 'promoted-soon-1' });
+    await t.http().get('/api/users').set(bearer(accessToken)).expect(403);
+    const adminToken = await t.loginAs(DEMO_ACCOUNTS.admin.email);
+    await t.http().patch(`/api/users/${user.id}`).set(bearer(adminToken)).send({ role: 'admin' }).expect(200);
+    await t.http().get('/api/users').set(bearer(accessToken)).expect(200);
+    await t.http().patch(`/api/users/${user.id}`).set(bearer(adminToken)).send({ role: 'member' }).expect(200);
+    await t.http().get('/api/users').set(bearer(accessToken)).expect(403);
+  });
+
 });
 
 describe('sign-in limits, behind a proxy that names the client address', () => {

@@ -19,6 +19,7 @@ import { InjectRepository } from '@nestjs/typeorm';
 import { In, QueryFailedError, type EntityManager, type Repository } from 'typeorm';
 import { conflict, DomainError, notFound } from '../common/errors/domain-error.js';
 import { findReferences } from '../database/foreign-key-references.js';
+import { CommittedVersions } from './committed-versions.js';
 import { UnitOfWork } from '../database/unit-of-work.js';
 import { UsersService } from '../users/users.service.js';
 import type { ImportedProcess } from './import/read-process-file.js';
@@ -80,6 +81,8 @@ export class ProcessesService {
     private readonly users: UsersService,
     private readonly visibility: ProcessVisibility,
   ) {}
+
+  private readonly committedVersions = new CommittedVersions();
 
   /** The latest version of every profile the viewer may see, by name; deprecated ones only when asked; `search` matches name, node class or description. */
   async list(query: ListProcessesQuery, viewer: ProcessViewer): Promise<ProcessProfileSummary[]> {
@@ -243,13 +246,19 @@ export class ProcessesService {
    * PROCESS_NOT_FOUND too when a `viewer` is given who may not see the profile.
    * Pass the manager of an open transaction to read inside it.
    */
-  async resolveDefinition(processId: string, version?: number, manager: EntityManager = this.unitOfWork.manager, viewer?: ProcessViewer): Promise<ResolvedProcess> {
+  async resolveDefinition(processId: string, version?: number, inTransaction?: EntityManager, viewer?: ProcessViewer): Promise<ResolvedProcess> {
+    const manager = inTransaction ?? this.unitOfWork.manager;
     const profile = await manager.getRepository(ProcessProfileEntity).findOneBy({ id: processId });
     if (!profile || (viewer && !(await this.visibility.sees(viewer, profile.id)))) {
       throw new DomainError('PROCESS_NOT_FOUND', 'There is no process profile with this id', 404, 'processId');
     }
-    const row = await this.version(manager, profile.id, version ?? profile.latestVersion, 'processVersion');
-    return resolved(profile, row);
+    const number = version ?? profile.latestVersion;
+    // Outside a transaction only: a version written by a transaction that is then rolled back must never be kept.
+    const cached = inTransaction ? undefined : this.committedVersions.get(profile.id, number);
+    if (cached) return { profileId: profile.id, name: profile.name, deprecated: profile.deprecated, ...cached };
+    const result = resolved(profile, await this.version(manager, profile.id, number, 'processVersion'));
+    if (!inTransaction) this.committedVersions.keep(profile.id, number, result);
+    return result;
   }
 
   /** The same for a version id, as a sheet's foreign key holds it; 404 PROCESS_VERSION_NOT_FOUND (field processVersionId). */

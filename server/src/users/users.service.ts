@@ -22,9 +22,20 @@ export interface UserCard extends UserRef {
   email: string;
 }
 
+/**
+ * How long the account behind a token is reused without reading it again. Every change made through this
+ * service forgets it at once; the bound matters only for a change made by another server process on a
+ * shared database (a disabled account is refused there within this time).
+ */
+export const ACCOUNT_CACHE_MS = 2000;
+const ACCOUNT_CACHE_LIMIT = 10_000;
+
 /** The accounts. Other modules read users only through this service (cards by id, lookup by e-mail). */
 @Injectable()
 export class UsersService {
+  /** Accounts read for authenticated requests, with the time they were read (see ACCOUNT_CACHE_MS). */
+  private readonly recent = new Map<string, { account: UserEntity; readAt: number }>();
+
   constructor(
     @InjectRepository(UserEntity) private readonly users: Repository<UserEntity>,
     private readonly unitOfWork: UnitOfWork,
@@ -32,6 +43,29 @@ export class UsersService {
 
   findById(id: string, manager?: EntityManager): Promise<UserEntity | null> {
     return this.repository(manager).findOneBy({ id });
+  }
+
+  /**
+   * The account of an authenticated request: read at most once per ACCOUNT_CACHE_MS per account, so a burst
+   * of requests does not read the same row each time (a copy is handed out: callers cannot change the cache).
+   */
+  async accountOfRequest(id: string): Promise<UserEntity | null> {
+    const now = Date.now();
+    const cached = this.recent.get(id);
+    if (cached && now - cached.readAt < ACCOUNT_CACHE_MS) return this.users.create({ ...cached.account });
+    const account = await this.users.findOneBy({ id });
+    if (!account) {
+      this.recent.delete(id);
+      return null;
+    }
+    if (this.recent.size >= ACCOUNT_CACHE_LIMIT) this.recent.clear();
+    this.recent.set(id, { account: this.users.create({ ...account }), readAt: now });
+    return account;
+  }
+
+  /** Forgets the cached account after a change (called by every write below, whether its transaction commits or not). */
+  private forget(id: string): void {
+    this.recent.delete(id);
   }
 
   findByEmail(email: string, manager?: EntityManager): Promise<UserEntity | null> {
@@ -70,21 +104,25 @@ export class UsersService {
 
   /** Stores a new hash (a re-registration of an unconfirmed account, or a re-hash on sign-in). */
   async setPassword(id: string, passwordHash: string, change: Partial<Pick<UserEntity, 'displayName'>> = {}, manager?: EntityManager): Promise<void> {
+    this.forget(id);
     await this.repository(manager).update({ id }, { passwordHash, ...change });
   }
 
   /** Sets roles and grants directly, without the last-admin check (the demo seed, on an empty database). */
   async grant(id: string, grants: Partial<Pick<UserEntity, 'role' | 'processMaintainer' | 'libraryAccess'>>, manager?: EntityManager): Promise<void> {
+    this.forget(id);
     await this.repository(manager).update({ id }, grants);
   }
 
   async confirmEmail(id: string, manager?: EntityManager): Promise<void> {
+    this.forget(id);
     await this.repository(manager).update({ id }, { emailConfirmed: true });
   }
 
   /** Changes role, disabled, processMaintainer or libraryAccess; refuses a change that would leave no enabled admin. */
-  update(id: string, change: UpdateUserRequest): Promise<UserEntity> {
-    return this.unitOfWork.run(async (manager) => {
+  async update(id: string, change: UpdateUserRequest): Promise<UserEntity> {
+    this.forget(id);
+    const saved = await this.unitOfWork.run(async (manager) => {
       const repository = manager.getRepository(UserEntity);
       const user = await repository.findOneBy({ id });
       if (!user) throw notFound('USER_NOT_FOUND', 'There is no user with this id');
@@ -98,6 +136,8 @@ export class UsersService {
       }
       return repository.save(updated);
     });
+    this.forget(id); // a request read while the change was being written must not keep the old row
+    return saved;
   }
 
   private repository(manager: EntityManager | undefined): Repository<UserEntity> {
