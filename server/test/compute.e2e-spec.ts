@@ -1,5 +1,5 @@
 import { BF180G } from '@channelwright/shared/device';
-import { MAX_SWEEP_POINTS } from '@channelwright/shared/schemas';
+import { MAX_SWEEP_POINTS, MAX_SWEEP_TOTAL_POINTS } from '@channelwright/shared/schemas';
 import { DEMO_ACCOUNTS } from '../src/seed/demo-accounts.js';
 import { bearer, createTestApp, type TestApp } from './helpers/test-app.js';
 
@@ -175,6 +175,13 @@ describe('compute API', () => {
       const response = await post('sweep', { ...sizeBody, hold: 'id', sweep: { param: 'vov', from: 0.05, to: 0.5, points: 10 * MAX_SWEEP_POINTS } });
       expect(response.status).toBe(400);
       expect(response.body.field).toBe('sweep.points');
+    });
+
+    it('more points over all series than one answer may hold (10,000 points × 20 temperatures)', async () => {
+      const response = await post('sweep', { ...sizeBody, hold: 'id', temperatures: Array.from({ length: 20 }, (_, i) => -40 + 8 * i), sweep: { param: 'vov', from: 0.05, to: 0.5, points: MAX_SWEEP_POINTS } });
+      expect(response.status).toBe(400);
+      expect(response.body.field).toBe('sweep.points');
+      expect(response.body.message).toContain(`at most ${MAX_SWEEP_TOTAL_POINTS.toLocaleString('en')} points over all series`);
     });
   });
 });
