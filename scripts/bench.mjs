@@ -4,7 +4,7 @@ import { buildAll, ensureInstalled, log, run, runNpm } from './lib.mjs';
 await ensureInstalled();
 await buildAll();
 let failures = 0;
-for (const workspace of ['shared', 'server']) {
+for (const workspace of ['shared', 'server', 'client']) {
   log(`benchmarks of ${workspace}…`);
   if ((await runNpm(['run', 'bench', '-w', workspace, '--if-present'])) !== 0) failures += 1;
 }
