@@ -10,6 +10,8 @@ export default mergeConfig(
       setupFiles: ['./src/test/setup.ts'],
       css: false,
       restoreMocks: true,
+      // A test waits up to 10 s for a lazily loaded page (setup.ts); the whole test gets more than that.
+      testTimeout: 30_000,
     },
   }),
 );

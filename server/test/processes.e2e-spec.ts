@@ -1,5 +1,6 @@
 import { BF130G, BF180G, DEMO_DATA_NOTICE } from '@channelwright/shared/device';
 import {
+  PARAMETER_CONVENTION,
   apiErrorBodySchema,
   processDiffSchema,
   processFileSchema,
@@ -60,7 +61,7 @@ describe('the process-profile library', () => {
   describe('creating and versioning', () => {
     it('creates a profile with version 1, then each edit adds a version and the old ones stay readable', async () => {
       const created = await create('BF-CRUD-1');
-      expect(created).toMatchObject({ name: 'BF-CRUD-1', nodeClass: '180 nm', latestVersion: 1, demoData: false, version: { number: 1, message: 'first cut' } });
+      expect(created).toMatchObject({ name: 'BF-CRUD-1', nodeClass: '180 nm', latestVersion: 1, demoData: false, version: { number: 1, message: 'first cut', parameterConvention: PARAMETER_CONVENTION } });
       expect(created.updatedBy?.displayName).toBe(DEMO_ACCOUNTS.admin.displayName);
 
       const edited = testProcess('BF-CRUD-1', (p) => (p.nmos.kp = 300e-6));

@@ -47,6 +47,7 @@ export function toVersionSummary(version: ProcessVersionEntity, users: UserCards
     author: toUserRef(version.authorId === null ? null : users.get(version.authorId)),
     createdAt: version.createdAt.toISOString(),
     modelCardSha256: version.modelCardSha256,
+    parameterConvention: version.parameterConvention,
   };
 }
 

@@ -27,6 +27,13 @@ export class ProcessVersionEntity {
   @Column({ type: 'integer', default: 1 })
   schemaVersion: number;
 
+  /**
+   * The parameter convention the version was written under (PARAMETER_CONVENTION): rows older than engine 2.0
+   * hold 1 (the migration's default); every new row is written with the current one.
+   */
+  @Column({ type: 'integer', default: 1 })
+  parameterConvention: number;
+
   /** JSON text of the Process. */
   @Column({ type: 'text' })
   definition: string;

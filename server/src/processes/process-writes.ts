@@ -1,4 +1,4 @@
-import { PROCESS_FILE_SCHEMA_VERSION, type Process } from '@channelwright/shared/schemas';
+import { PARAMETER_CONVENTION, PROCESS_FILE_SCHEMA_VERSION, type Process } from '@channelwright/shared/schemas';
 import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
 import { processVersionAudit } from '../audit/process-audit.js';
@@ -107,6 +107,7 @@ export class ProcessWriter {
         profileId,
         number,
         schemaVersion: PROCESS_FILE_SCHEMA_VERSION,
+        parameterConvention: PARAMETER_CONVENTION,
         definition: JSON.stringify(definition),
         modelCard: card?.text ?? null,
         modelCardSha256: card?.sha256 ?? null,

@@ -72,6 +72,14 @@ export const processProfileSummarySchema = z.object({
 });
 export type ProcessProfileSummary = z.infer<typeof processProfileSummarySchema>;
 
+/**
+ * How the engine reads a version's parameters. 1: written before engine 2.0, when the all-region model used
+ * kp without the bulk-charge factor 1/n in strong inversion (a kp fitted to that model is n times too small
+ * for today's). 2: kp = µ0·Cox in both models; the all-region model divides by n (Tsividis & McAndrew, 2011,
+ * ch. 4). New versions are always written with the current convention.
+ */
+export const PARAMETER_CONVENTION = 2;
+
 export const processVersionSummarySchema = z.object({
   id: z.string(),
   number: z.number().int(),
@@ -79,6 +87,7 @@ export const processVersionSummarySchema = z.object({
   author: userRefSchema.nullable(),
   createdAt: z.string(),
   modelCardSha256: z.string().nullable().describe('SHA-256 of the version\'s model card; null when it has none'),
+  parameterConvention: z.number().int().describe('How the engine reads kp (PARAMETER_CONVENTION): 1 before engine 2.0, 2 now'),
 });
 export type ProcessVersionSummary = z.infer<typeof processVersionSummarySchema>;
 

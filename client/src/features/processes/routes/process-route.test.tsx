@@ -8,11 +8,11 @@ import { profileOf, versionOf } from '../testing/profiles';
 
 const v2 = () => profileOf('p-bf180', { ...structuredClone(BF180G), nmos: { ...BF180G.nmos, kp: 310e-6 } }, { version: 2 });
 
-function fakeProfile(me = designer) {
+function fakeProfile(me = designer, profile = v2()) {
   return installFakeApi({
     'GET /api/config': { body: demoConfig },
     'GET /api/auth/me': { body: me },
-    'GET /api/processes/p-bf180': { body: v2() },
+    'GET /api/processes/p-bf180': { body: profile },
     'GET /api/processes/p-bf180/versions': { body: [versionOf('p-bf180', 2, 'kp from the new lot'), versionOf('p-bf180', 1)] },
     'GET /api/processes/p-bf180/diff': {
       body: { profileId: 'p-bf180', from: 1, to: 2, changes: [{ path: 'nmos.kp', group: 'nmos', kind: 'changed', unit: 'A/V²', from: 290e-6, to: 310e-6 }] },
@@ -33,6 +33,15 @@ describe('the process profile page', { timeout: 15_000 }, () => {
     expect(within(ff).getAllByRole('cell').map((c) => c.textContent)).toEqual(['-40 mV', '1.1', '-40 mV', '1.1']);
     expect(screen.getAllByText("Invented demo data, not any foundry's process").length).toBeGreaterThan(0);
     expect(screen.getByText(/not a foundry's process or device model/)).toBeInTheDocument();
+    expect(screen.queryByText('Written before engine 2.0: check kp')).not.toBeInTheDocument();
+  });
+
+  it('asks to check kp on a version written under the parameter convention before engine 2.0', async () => {
+    const old = v2();
+    fakeProfile(designer, { ...old, version: { ...old.version, parameterConvention: 1 } });
+    renderApp('/processes/p-bf180', { token: 'token-designer' });
+    expect(await screen.findByText('Written before engine 2.0: check kp')).toBeInTheDocument();
+    expect(screen.getByText(/multiply it by n \(or fit it again\)/)).toBeInTheDocument();
   });
 
   it('shows the version history and what changed between the last two versions', async () => {

@@ -72,7 +72,7 @@ export default function ProcessRoute() {
         actions={<ProfileActions profile={data} maintainer={maintainer} onImport={importDialog.open} />}
       />
       <Stack gap="lg">
-        <ProcessCautions demoData={data.demoData} />
+        <ProcessCautions demoData={data.demoData} parameterConvention={data.version.parameterConvention} />
         <Paper withBorder radius="md" p="md">
           <ProfileSummary profile={data} />
         </Paper>

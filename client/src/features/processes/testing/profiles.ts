@@ -1,5 +1,5 @@
 import { BF130G, BF180G } from '@channelwright/shared/device';
-import { cornerNames, type Process, type ProcessProfile, type ProcessProfileSummary, type ProcessVersionSummary } from '@channelwright/shared/schemas';
+import { cornerNames, PARAMETER_CONVENTION, type Process, type ProcessProfile, type ProcessProfileSummary, type ProcessVersionSummary } from '@channelwright/shared/schemas';
 import { admin } from '../../../test/fixtures';
 
 // Invented demo data, not any foundry's process: the seeded Brackenfold profiles as the API answers them.
@@ -27,7 +27,7 @@ export function profileOf(id: string, definition: Process, options: { version?: 
 }
 
 export function versionOf(profileId: string, number: number, message = `version ${number}`): ProcessVersionSummary {
-  return { id: `${profileId}-v${number}`, number, message, author: by, createdAt: `2026-11-${String(number + 1).padStart(2, '0')}T09:00:00.000Z`, modelCardSha256: null };
+  return { id: `${profileId}-v${number}`, number, message, author: by, createdAt: `2026-11-${String(number + 1).padStart(2, '0')}T09:00:00.000Z`, modelCardSha256: null, parameterConvention: PARAMETER_CONVENTION };
 }
 
 export const bf180 = () => profileOf('p-bf180', structuredClone(BF180G));
