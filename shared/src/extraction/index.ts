@@ -6,6 +6,7 @@
 export { type MeasuredPoint, type MeasuredCurve, curvesOf } from './measured-curves.js';
 export { type CurveEstimates, curveEstimates, LINEAR_REGION_VDS } from './threshold-estimates.js';
 export { bodyEffectFit } from './initial-estimates.js';
+export { type TableSelection, pointsOfTable } from './table-points.js';
 export { FIT_PARAMETERS, FIT_PARAMETER_INFO, type FitParameter, type FitParameterInfo } from './fit-parameters.js';
 export {
   type ExtractionInput,

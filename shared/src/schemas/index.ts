@@ -23,3 +23,4 @@ export * from './sheet-csv.js';
 export * from './audit.js';
 export * from './revisions.js';
 export * from './reviews.js';
+export * from './extraction.js';
