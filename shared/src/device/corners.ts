@@ -2,6 +2,7 @@ import { CORNER_FIGURES, type CornerFigure, type CornersRequest, type CornersRes
 import type { Warning } from '../schemas/warning.js';
 import { type Process, cornerNames } from '../schemas/process.js';
 import { channelOf, slopeFactorOf, thresholdOf } from './channel.js';
+import type { CurrentModel } from './drain-current.js';
 import { EngineError, isEngineError } from './errors.js';
 import { type OperatingPoint, operatingPoint } from './operating-point.js';
 import { overdriveForCurrent } from './overdrive.js';
@@ -39,7 +40,7 @@ export function temperaturesOf(request: Pick<CornersRequest, 'temperatures'>, pr
  * highest value of each figure and where, `worst` the worse of the two for figures that have a worse
  * direction (lowest gm, highest ioff …).
  */
-export function cornerAnalysis(request: CornersRequest, process: Process): CornerAnalysis {
+export function cornerAnalysis(request: CornersRequest & { model: CurrentModel }, process: Process): CornerAnalysis {
   const points: CornerPoint[] = [];
   const corners = cornersOf(request, process);
   for (const [index, corner] of corners.entries()) {
@@ -59,7 +60,7 @@ export function cornerAnalysis(request: CornersRequest, process: Process): Corne
   return { points, ...extremesOf(points) };
 }
 
-function biasedOperatingPoint(device: PreparedDevice, request: CornersRequest): OperatingPoint {
+function biasedOperatingPoint(device: PreparedDevice, request: CornersRequest & { model: CurrentModel }): OperatingPoint {
   const { w, l, vds, vsb, model } = request;
   const fingers = request.fingers ?? 1;
   checkLength(device, l);
@@ -76,7 +77,8 @@ function biasedOperatingPoint(device: PreparedDevice, request: CornersRequest): 
   return operatingPoint(device, model, w, l, { vgs, vds, vsb }, fingers);
 }
 
-function extremesOf(points: readonly CornerPoint[]): Pick<CornersResponse, 'extremes' | 'worst'> {
+/** The lowest and highest value of each figure over the points, and the worse of the two where a figure has a worse direction. */
+export function extremesOf(points: readonly CornerPoint[]): Pick<CornersResponse, 'extremes' | 'worst'> {
   const extremes: CornersResponse['extremes'] = {};
   const worst: CornersResponse['worst'] = {};
   for (const figure of CORNER_FIGURES) {

@@ -116,12 +116,23 @@ export {
   tablePointCount,
   lineOffset,
   vgsOfNode,
+  widthScale,
+  widthForScale,
   checkTableGrid,
   checkLookupTable,
 } from './lookup-table.js';
-export { encodeTable, decodeTable } from './table-codec.js';
+export { encodeTable, encodeTableInSteps, decodeTable } from './table-codec.js';
 export { type DefaultGridInputs, defaultTableGrid } from './default-table-grid.js';
 export { MonotoneCubic, monotoneCubicAt } from './monotone-cubic.js';
-export { type PreparedTable, type TableConditions, TableLine, prepareTable, tableLine } from './table-lookup.js';
+export { type PreparedTable, type TableConditions, TableLine, prepareTable, prepareTableInSteps, tableLine } from './table-lookup.js';
 export { type TableOperatingPoint, operatingPointOnLine, tableOperatingPoint } from './table-operating-point.js';
 export { type TableSizeTarget, type TableSizing, sizeFromTable, vgsForGmId, vgsForOverdrive, vgsForCurrentDensity } from './table-sizing.js';
+
+// The table model in the compute API: dispatch by model, the full operating point of a table result, design charts.
+export { type TableChoice, type TableSource, tableOf } from './table-source.js';
+export { type TableFigures, TABLE_ANALYTIC_FIGURES, tableFigures, tableZtcVgs, gmIdPeakOf } from './table-figures.js';
+export { type TableSizeResponse, sizeWithTable } from './table-size.js';
+export { sweepWithTable } from './table-sweep.js';
+export { cornersWithTable } from './table-corners.js';
+export { type DesignChartConditions, type DesignChartData, designChart } from './design-chart.js';
+export { compareResults, differencesOf } from './compare-results.js';

@@ -48,7 +48,7 @@ export interface SweepColumns {
  * gmId replaces the request's constraint. Every figure is analytic; a point with no answer is NaN in its
  * columns and counted in the series warnings. The request must already be parsed (sweepRequestSchema).
  */
-export function sweep(request: SweepRequest, process: Process): SweepColumns {
+export function sweep(request: SweepRequest & { model: CurrentModel }, process: Process): SweepColumns {
   const baseDevice = prepareDevice(process, request.polarity, { corner: request.corner, temperature: request.temperature, flavour: request.flavour });
   const base = solveSize(baseDevice, request.model, request);
   const fields = request.fields ?? SWEEP_FIELDS;
@@ -66,7 +66,7 @@ export function sweep(request: SweepRequest, process: Process): SweepColumns {
 type GateMode = 'swept-vgs' | 'swept-vov' | 'swept-gmId' | 'held-vgs' | 'given-vov' | 'given-vgs' | 'given-gmId' | 'solve-for-id';
 
 function sweepSeries(
-  request: SweepRequest,
+  request: SweepRequest & { model: CurrentModel },
   process: Process,
   base: Sizing,
   corner: string,

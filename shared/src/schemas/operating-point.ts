@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { tableRefSchema } from './characterisation-table.js';
 import { polaritySchema } from './process.js';
 import { modelSchema } from './request-fields.js';
 
@@ -77,4 +78,9 @@ export const resultContext = {
   polarity: polaritySchema,
   flavour: z.string().optional(),
   model: modelSchema,
+  table: tableRefSchema.optional().describe('Model table: the table the result was interpolated in (its SHA-256 makes the result stale when the version gets another table)'),
+  analyticFigures: z
+    .array(z.string())
+    .optional()
+    .describe('Model table: the figures the tables do not hold, computed with the all-region long-channel model and the process parameters (mismatch, junction capacitances, gate and junction leakage, …)'),
 };
