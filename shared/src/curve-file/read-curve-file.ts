@@ -1,4 +1,4 @@
-import { type MeasuredPoint, curvesOf } from '../extraction/measured-curves.js';
+import { type MeasuredPoint, conditionsOf, curvesOf } from '../extraction/measured-curves.js';
 import type { Problem } from '../schemas/api-error.js';
 import { CURVE_FILE_MAX_POINTS, type CurveSummary, type SignConvention } from '../schemas/extraction.js';
 import type { Polarity } from '../schemas/process.js';
@@ -191,12 +191,7 @@ function summaries(points: readonly MeasuredPoint[], lines: readonly number[]): 
     const rows = curve.indices.map((i) => lines[i]);
     const vgs = curve.indices.map((i) => points[i].vgs);
     return {
-      w: curve.w,
-      l: curve.l,
-      fingers: curve.fingers,
-      vds: curve.vds,
-      vsb: curve.vsb,
-      temperature: curve.temperature,
+      ...conditionsOf(curve),
       points: curve.indices.length,
       vgsMin: Math.min(...vgs),
       vgsMax: Math.max(...vgs),

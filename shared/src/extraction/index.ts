@@ -3,7 +3,7 @@
  * Pure; docs/extraction.md gives the methods and their sources. A separate entry point, so the client's
  * bundle does not carry the fitting library unless it fits.
  */
-export { type MeasuredPoint, type MeasuredCurve, curvesOf } from './measured-curves.js';
+export { type MeasuredPoint, type MeasuredCurve, conditionsOf, curvesOf } from './measured-curves.js';
 export { type CurveEstimates, curveEstimates, LINEAR_REGION_VDS } from './threshold-estimates.js';
 export { bodyEffectFit } from './initial-estimates.js';
 export { type TableSelection, pointsOfTable } from './table-points.js';
@@ -18,3 +18,4 @@ export {
   extractParameters,
   slopeFactorOfSwing,
 } from './extract-parameters.js';
+export { extractionReport } from './extraction-report.js';

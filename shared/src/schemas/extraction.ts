@@ -1,13 +1,19 @@
 import { z } from 'zod';
 import { polaritySchema, deviceParamsSchema } from './process.js';
 import { messageSchema, userRefSchema, versionNumberText } from './process-profile.js';
-import { modelSchema } from './request-fields.js';
+import { ANALYTIC_MODELS } from './request-fields.js';
 
 /**
  * Parameter extraction (docs/extraction.md): a profile's parameters fitted to measured or simulated drain-current
  * curves, run as a job. Numbers in SI units, temperatures in °C, voltages and currents polarity-normalised (PMOS:
  * VSG, VSD, VBS and the source-to-drain current, all positive for a conducting device).
  */
+
+/** The models a fit can be made of: the two analytic ones (a table is measured, not fitted). */
+export const extractionModelSchema = z
+  .enum(ANALYTIC_MODELS, { error: 'model must be "all-region" or "square-law"' })
+  .describe('square-law: SPICE level 1\'s parameters; all-region: the charge-based model with its short-channel terms');
+export type ExtractionModel = z.infer<typeof extractionModelSchema>;
 
 /** The parameters an extraction can fit (the engine's FIT_PARAMETERS are this list). */
 export const EXTRACTION_PARAMETERS = ['vt0', 'kp', 'n', 'gamma', 'twoPhiF', 'lambda', 'dl', 'theta0', 'theta1', 'theta2', 'dibl', 'diblExp', 'vtl', 'vtlExp', 'nl', 'pclm', 'vtTc', 'muExp', 'muExpL'] as const;
@@ -28,24 +34,32 @@ const parameterList = z
   .max(EXTRACTION_PARAMETERS.length)
   .refine((list) => new Set(list).size === list.length, 'fixed lists a parameter twice');
 
-/** The options of a fit, in a JSON body (a re-run): SI numbers. */
-export const extractionOptionsSchema = z.strictObject({
-  model: modelSchema.default('all-region').describe('square-law: SPICE level 1\'s parameters; all-region: the charge-based model with its short-channel terms'),
-  fixed: parameterList.default([]).describe('Parameters held at the base profile\'s value even where the data could tell them'),
-  noiseFloor: z.number({ error: 'noiseFloor must be a number in A' }).min(0, 'noiseFloor must be at least 0 A').max(1e-3, 'noiseFloor must be at most 1 mA').nullable().default(null).describe('Currents below this are left out, A; 1 pA when null'),
+/** The fields of a fit's options, each without its default (a re-run takes absent ones from the run it repeats). */
+const optionFields = {
+  model: extractionModelSchema,
+  fixed: parameterList.describe('Parameters held at the base profile\'s value even where the data could tell them'),
+  noiseFloor: z.number({ error: 'noiseFloor must be a number in A' }).min(0, 'noiseFloor must be at least 0 A').max(1e-3, 'noiseFloor must be at most 1 mA').nullable().describe('Currents below this are left out, A; 1 pA when null'),
   maxIterations: z
     .number({ error: 'maxIterations must be a whole number' })
     .int('maxIterations must be a whole number')
     .min(10, 'maxIterations must be at least 10')
     .max(EXTRACTION_MAX_ITERATIONS, `maxIterations must be at most ${EXTRACTION_MAX_ITERATIONS}`)
-    .default(300)
     .describe('Most iterations per stage of the fit'),
-  minGmId: z.number({ error: 'minGmId must be a number in S/A' }).min(0, 'minGmId must be at least 0 S/A').max(40, 'minGmId must be at most 40 S/A').nullable().default(null).describe('All-region fits leave out points of lower gm/ID (far above threshold); 3 S/A when null'),
+  minGmId: z.number({ error: 'minGmId must be a number in S/A' }).min(0, 'minGmId must be at least 0 S/A').max(40, 'minGmId must be at most 40 S/A').nullable().describe('All-region fits leave out points of lower gm/ID (far above threshold); 3 S/A when null'),
+};
+
+/** The options of a fit: SI numbers. */
+export const extractionOptionsSchema = z.strictObject({
+  model: optionFields.model.default('all-region'),
+  fixed: optionFields.fixed.default([]),
+  noiseFloor: optionFields.noiseFloor.default(null),
+  maxIterations: optionFields.maxIterations.default(300),
+  minGmId: optionFields.minGmId.default(null),
 });
 export type ExtractionOptions = z.infer<typeof extractionOptionsSchema>;
 
 /** POST /api/extractions/:id/rerun: the same points, other options (absent: as the run it repeats). */
-export const rerunExtractionRequestSchema = extractionOptionsSchema.partial();
+export const rerunExtractionRequestSchema = z.strictObject(optionFields).partial();
 export type RerunExtractionRequest = z.infer<typeof rerunExtractionRequestSchema>;
 
 /** A text field of a multipart upload holding a quantity ("2u", "2 µm", "2e-6"), read by the curve-file reader. */
@@ -66,7 +80,7 @@ export const extractionUploadFieldsSchema = z.strictObject({
   l: quantityText('L').optional().describe('Drawn length when the file has no L column'),
   fingers: numberText('fingers', 1, 10_000, '').int('fingers must be a whole number').optional().describe('Fingers when the file has no fingers column; 1 when absent'),
   temperature: quantityText('temperature').optional().describe('°C, when the file has no temperature column'),
-  model: modelSchema.default('all-region'),
+  model: extractionModelSchema.default('all-region'),
   fixed: z
     .string()
     .trim()
@@ -147,7 +161,7 @@ export const excludedPointSchema = z.object({
 export type ExcludedPointResponse = z.infer<typeof excludedPointSchema>;
 
 export const extractionResultSchema = z.object({
-  model: modelSchema,
+  model: extractionModelSchema,
   parameters: z.array(fittedParameterSchema),
   held: z.array(heldParameterSchema),
   fitted: deviceParamsSchema.describe('The base profile\'s parameters of this polarity with the fitted values in'),
@@ -184,7 +198,7 @@ export const extractionSchema = z.object({
 export type Extraction = z.infer<typeof extractionSchema>;
 
 export const extractionSummarySchema = extractionSchema.pick({ id: true, status: true, progress: true, process: true, polarity: true, savedAs: true, createdBy: true, createdAt: true, finishedAt: true }).extend({
-  model: modelSchema,
+  model: extractionModelSchema,
   fileName: z.string().nullable(),
   converged: z.boolean().nullable(),
 });
