@@ -1,3 +1,4 @@
+import { rmSync } from 'node:fs';
 import { lambdaAtLength } from '@channelwright/shared/device';
 import { apiErrorBodySchema, type Extraction, extractionCurvesSchema, extractionListSchema, extractionSchema, type Problem, processProfileSchema } from '@channelwright/shared/schemas';
 import { DEMO_ACCOUNTS } from '../src/seed/demo-accounts.js';
@@ -298,5 +299,45 @@ describeWithNgspice('parameter extraction through the API (curves from ngspice l
       expect(response.body).toMatchObject({ code: 'STALE_EDIT', field: 'version' });
       expect((await t.http().get(`/api/processes/${bf180.id}`).set(bearer(admin)).expect(200)).body.latestVersion).toBe(latest);
     });
+  });
+});
+
+describeWithNgspice('an extraction running when the server stops', () => {
+  it('is run again by the next start on the same data, counting the attempt, and can be cancelled there', async () => {
+    requireNativeNgspice();
+    const csv = level1CurveFile({ polarity: 'nmos', ...SWEEP });
+    const first = await createTestApp();
+    let second: TestApp | undefined;
+    try {
+      const admin = await first.loginAs(DEMO_ACCOUNTS.admin.email);
+      const profiles = (await first.http().get('/api/processes').set(bearer(admin)).expect(200)).body as { id: string; name: string }[];
+      const request = first.http().post('/api/extractions').set(bearer(admin));
+      for (const [key, value] of Object.entries({ processId: profiles.find((p) => p.name === 'BF180-G')!.id, polarity: 'nmos', w: '10u', l: '2u', model: 'all-region', maxIterations: '2000' })) request.field(key, value);
+      const job = extractionSchema.parse((await request.attach('file', Buffer.from(csv), 'level1.csv').expect(202)).body);
+      for (;;) {
+        const now = extractionSchema.parse((await first.http().get(`/api/extractions/${job.id}`).set(bearer(admin)).expect(200)).body);
+        if (now.status === 'running') break;
+        expect(now.status).toBe('queued');
+        await new Promise((resolve) => setTimeout(resolve, 50));
+      }
+      await first.close({ keepData: true });
+
+      second = await createTestApp({ dataDir: first.dataDir });
+      const token = await second.loginAs(DEMO_ACCOUNTS.admin.email);
+      let resumed: Extraction;
+      for (;;) {
+        resumed = extractionSchema.parse((await second.http().get(`/api/extractions/${job.id}`).set(bearer(token)).expect(200)).body);
+        if (resumed.status === 'running') break;
+        expect(resumed).toMatchObject({ status: 'queued', attempts: 1 });
+        await new Promise((resolve) => setTimeout(resolve, 50));
+      }
+      // The first run was interrupted; this is the second.
+      expect(resumed.attempts).toBe(2);
+      const cancelled = extractionSchema.parse((await second.http().delete(`/api/extractions/${job.id}`).set(bearer(token)).expect(200)).body);
+      expect(cancelled.status).toBe('cancelled');
+    } finally {
+      await second?.close();
+      rmSync(first.dataDir, { recursive: true, force: true });
+    }
   });
 });

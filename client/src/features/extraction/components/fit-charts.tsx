@@ -102,7 +102,7 @@ function ResidualChart({ rows }: { rows: Row[] }) {
         <ComposedChart data={rows} margin={{ top: 8, right: 16, bottom: 24, left: 8 }}>
           <CartesianGrid stroke={GRID} strokeDasharray="2 3" />
           <XAxis dataKey="vgs" type="number" domain={['dataMin', 'dataMax']} tickFormatter={tickOf('V')} tick={{ fontSize: 11, fill: INK }} stroke={INK} label={{ value: 'VGS (V)', position: 'insideBottom', offset: -12, fontSize: 12, fill: INK }} />
-          <YAxis type="number" tickFormatter={(v: number) => `${v.toPrecision(2)} %`} tick={{ fontSize: 11, fill: INK }} stroke={INK} width={64} />
+          <YAxis type="number" tickFormatter={(v: number) => `${Number(v.toPrecision(2))} %`} tick={{ fontSize: 11, fill: INK }} stroke={INK} width={72} />
           <ZAxis range={[DOT_AREA, DOT_AREA]} />
           <ReferenceLine y={0} stroke={INK} />
           <Tooltip formatter={(value) => (typeof value === 'number' ? `${value.toPrecision(3)} %` : String(value))} labelFormatter={(vgs) => `VGS ${formatQuantity(Number(vgs), 'V', { digits: 4 })}`} isAnimationActive={false} />
