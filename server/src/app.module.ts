@@ -7,6 +7,7 @@ import { serveClient } from './common/static/serve-client.js';
 import type { AppConfig } from './config/app-config.js';
 import { ConfigModule } from './config/config.module.js';
 import { DatabaseModule } from './database/database.module.js';
+import { ExtractionsModule } from './extractions/extractions.module.js';
 import { HealthModule } from './health/health.module.js';
 import { MailModule } from './mail/mail.module.js';
 import { ProcessesModule } from './processes/processes.module.js';
@@ -41,6 +42,7 @@ export class AppModule {
         SheetsModule,
         RevisionsModule,
         ReviewsModule,
+        ExtractionsModule,
         ...serveClient(config.clientDist),
       ],
     };

@@ -1,4 +1,4 @@
-import { IconChecklist, IconCpu, IconHome2, IconMail, IconMailbox, IconRuler2, IconUsers, type Icon } from '@tabler/icons-react';
+import { IconChartDots, IconChecklist, IconCpu, IconHome2, IconMail, IconMailbox, IconRuler2, IconUsers, type Icon } from '@tabler/icons-react';
 import type { ComponentType } from 'react';
 import { canMaintainProcesses, isAdmin, type Permission } from '../lib/session/permissions';
 
@@ -31,6 +31,8 @@ export const shellRoutes: ShellRoute[] = [
   { path: '/processes/new', page: () => import('../features/processes/routes/process-new-route'), access: canMaintainProcesses },
   { path: '/processes/:id', page: () => import('../features/processes/routes/process-route') },
   { path: '/processes/:id/edit', page: () => import('../features/processes/routes/process-edit-route'), access: canMaintainProcesses },
+  { path: '/extractions', page: () => import('../features/extraction/routes/extractions-route'), nav: { label: 'Fit parameters', icon: IconChartDots } },
+  { path: '/extractions/:id', page: () => import('../features/extraction/routes/extraction-route') },
   { path: '/workbench', page: () => import('./pages/scratch-device-page'), nav: { label: 'Size a device', icon: IconRuler2 } },
   { path: '/projects/:projectId', page: () => import('../features/projects/routes/project-route') },
   { path: '/sheets/:sheetId', page: () => import('./pages/sheet-page') },

@@ -50,6 +50,8 @@ export interface ResolvedProcess {
 /** A process version as other modules show it: its number, and its profile's newest. */
 export interface VersionFacts {
   profileId: string;
+  /** The profile's name. */
+  name: string;
   number: number;
   latestVersion: number;
 }
@@ -273,7 +275,17 @@ export class ProcessesService {
     const ids = [...new Set(versionIds)];
     if (ids.length === 0) return new Map();
     const rows = await manager.getRepository(ProcessVersionEntity).find({ where: { id: In(ids) }, relations: { profile: true } });
-    return new Map(rows.map((row) => [row.id, { profileId: row.profileId, number: row.number, latestVersion: row.profile.latestVersion }]));
+    return new Map(rows.map((row) => [row.id, { profileId: row.profileId, name: row.profile.name, number: row.number, latestVersion: row.profile.latestVersion }]));
+  }
+
+  /**
+   * Appends a version inside the caller's transaction, for a write of another module that must be stored with it (a
+   * fitted extraction saved as a version, with its own row and audit); the caller checks maintainers. 409 STALE_EDIT
+   * when baseVersion is not the latest, 400 NO_CHANGES when nothing differs.
+   */
+  async appendVersionIn(manager: EntityManager, profileId: string, version: { baseVersion: number; definition: Process; message: string }, author: Author): Promise<{ profileId: string; name: string; number: number }> {
+    const profile = await this.writer.appendVersion(manager, profileId, version, author, 'definition.name');
+    return { profileId: profile.id, name: profile.name, number: profile.latestVersion };
   }
 
   /** The id of the profile with this name (any case), or null. */

@@ -76,7 +76,9 @@ export interface ExtractionResult {
 }
 
 export interface ExtractionProgress {
+  /** Iterations done so far, all stages together. */
   readonly iterations: number;
+  /** The most iterations the whole fit may take (maxIterations per stage, times the stages of the model). */
   readonly maxIterations: number;
   /** Sum of squared ln(ID_model/ID_measured) so far. */
   readonly error: number;
@@ -199,7 +201,9 @@ export function extractParameters(input: ExtractionInput, onProgress?: (progress
   };
   const model = new ModelAtPoints(input.polarity, input.model, input.base, points);
   let done = 0;
-  const report = (iterations: number, error: number) => onProgress?.({ iterations: done + iterations, maxIterations, error });
+  // The all-region fit runs two stages of up to maxIterations each: progress counts against both together.
+  const budget = maxIterations * (input.model === 'square-law' ? 1 : 2);
+  const report = (iterations: number, error: number) => onProgress?.({ iterations: done + iterations, maxIterations: budget, error });
   const boundsOf = (name: FitParameter) => fitBounds(name, lmin);
   const stage = (names: readonly FitParameter[], residualsOf: (params: DeviceParams) => Float64Array) => {
     const problem = fitProblem(input.base.params, names, values, boundsOf, residualsOf);

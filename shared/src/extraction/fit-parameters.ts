@@ -1,8 +1,9 @@
+import { EXTRACTION_PARAMETERS, type ExtractionParameter } from '../schemas/extraction.js';
 import type { DeviceParams } from '../schemas/process.js';
 
-/** The parameters an extraction can fit; every other field of the profile is taken from the base profile. */
-export const FIT_PARAMETERS = ['vt0', 'kp', 'n', 'gamma', 'twoPhiF', 'lambda', 'dl', 'theta0', 'theta1', 'theta2', 'dibl', 'diblExp', 'vtl', 'vtlExp', 'nl', 'pclm', 'vtTc', 'muExp', 'muExpL'] as const;
-export type FitParameter = (typeof FIT_PARAMETERS)[number];
+/** The parameters an extraction can fit (the contract's list); every other field of the profile is taken from the base profile. */
+export const FIT_PARAMETERS = EXTRACTION_PARAMETERS;
+export type FitParameter = ExtractionParameter;
 
 export interface FitParameterInfo {
   readonly unit: string;

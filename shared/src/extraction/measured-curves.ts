@@ -49,3 +49,8 @@ export function curvesOf(points: readonly MeasuredPoint[], include: (index: numb
   for (const curve of curves) curve.indices.sort((a, b) => points[a].vgs - points[b].vgs);
   return curves;
 }
+
+/** What the points of a curve share (its bias, temperature and geometry), without its indices. */
+export function conditionsOf(curve: MeasuredCurve): Omit<MeasuredCurve, 'indices'> {
+  return { w: curve.w, l: curve.l, fingers: curve.fingers, vds: curve.vds, vsb: curve.vsb, temperature: curve.temperature };
+}

@@ -31,6 +31,7 @@ export const AUDIT_ACTIONS = [
   'review.changes-requested',
   'comment.added',
   'process.version-created',
+  'extraction.saved',
 ] as const;
 export type AuditAction = (typeof AUDIT_ACTIONS)[number];
 

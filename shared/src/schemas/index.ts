@@ -27,3 +27,4 @@ export * from './model-card.js';
 export * from './characterisation-table.js';
 export * from './characterisation.js';
 export * from './design-chart.js';
+export * from './extraction.js';
