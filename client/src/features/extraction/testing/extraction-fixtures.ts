@@ -1,5 +1,5 @@
 import { BF180G } from '@channelwright/shared/device';
-import type { Extraction, ExtractionCurves, ExtractionResultResponse, ProcessProfile, ProcessProfileSummary } from '@channelwright/shared/schemas';
+import { PARAMETER_CONVENTION, type Extraction, type ExtractionCurves, type ExtractionResultResponse, type ProcessProfile, type ProcessProfileSummary } from '@channelwright/shared/schemas';
 import { admin } from '../../../test/fixtures';
 
 // Invented demo data: the invented Brackenfold BF180-G profile, and a fit of invented level-1-like curves to it.
@@ -26,7 +26,7 @@ export function savedProfile(version: number): ProcessProfile {
   return {
     ...bf180Summary,
     latestVersion: version,
-    version: { id: `p-bf180-v${version}`, number: version, message: 'Fitted', author: by, createdAt: '2026-12-02T08:00:00.000Z', modelCardSha256: null, definition: structuredClone(BF180G), modelCard: null },
+    version: { id: `p-bf180-v${version}`, number: version, message: 'Fitted', author: by, createdAt: '2026-12-02T08:00:00.000Z', modelCardSha256: null, parameterConvention: PARAMETER_CONVENTION, definition: structuredClone(BF180G), modelCard: null },
   };
 }
 
