@@ -7,7 +7,7 @@ import { DomainError } from '../common/errors/domain-error.js';
 import { ApiZodResponse } from '../common/openapi/api-zod.decorators.js';
 import { ZodValidationPipe } from '../common/validation/zod-validation.pipe.js';
 import type { Account } from '../users/users.service.js';
-import { FileTooLargeInterceptor } from './import/file-too-large.interceptor.js';
+import { FileTooLargeInterceptor } from '../common/files/file-too-large.interceptor.js';
 import { readProcessFile } from './import/read-process-file.js';
 import { MaintainersOnly } from './process-maintainer.guard.js';
 import { ProcessesService } from './processes.service.js';

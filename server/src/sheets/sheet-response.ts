@@ -13,6 +13,7 @@ import type { ResolvedProcess } from '../processes/processes.service.js';
 import type { DeviceEntity } from './device.entity.js';
 import { constraintOf, sizeRequestOf } from './device-targets.js';
 import type { SheetEntity } from './sheet.entity.js';
+import { leakageBudgetOf, offsetBudgetsOf } from './sheet-budgets.js';
 import { sheetTotals } from './sheet-totals.js';
 
 /** A sheet with everything its response needs, read in one go (see SheetReader). */
@@ -97,6 +98,8 @@ export function toSheetSummary(loaded: LoadedSheet): SheetSummary {
     temperature: sheet.temperature,
     corner: sheet.corner,
     model: sheet.model,
+    leakageBudget: leakageBudgetOf(sheet),
+    offsetBudgets: offsetBudgetsOf(sheet),
     version: sheet.version,
     deviceCount: loaded.devices.length,
     staleCount,
@@ -111,6 +114,6 @@ export function toSheet(loaded: LoadedSheet): Sheet {
   return {
     ...toSheetSummary(loaded),
     devices,
-    totals: sheetTotals(devices, loaded.process.definition),
+    totals: sheetTotals(devices, loaded.process.definition, offsetBudgetsOf(loaded.sheet)),
   };
 }

@@ -7,6 +7,7 @@ import { ProjectsService } from '../projects/projects.service.js';
 import type { DemoSeeder } from '../seed/demo-seeder.js';
 import { WRENMOSS_PROCESS_NAME, WRENMOSS_SHEETS } from './demo/wrenmoss-sheets.js';
 import { computationColumns, computeDevice } from './device-computation.js';
+import { budgetColumns } from './sheet-budgets.js';
 import { DeviceEntity } from './device.entity.js';
 import { SheetEntity } from './sheet.entity.js';
 
@@ -25,8 +26,10 @@ export class SheetsDemoSeeder implements DemoSeeder {
     const profileId = (await this.processes.profileIdByName(WRENMOSS_PROCESS_NAME, manager))!;
     const process = await this.processes.resolveDefinition(profileId, undefined, manager);
     for (const demo of WRENMOSS_SHEETS) {
-      const { processId: _id, processVersion: _version, ...fields } = createSheetRequestSchema.parse({ ...demo.sheet, processId: profileId });
-      const sheet = await manager.getRepository(SheetEntity).save(manager.create(SheetEntity, { ...fields, projectId, processVersionId: process.versionId }));
+      const { processId: _id, processVersion: _version, leakageBudget, offsetBudgets, ...fields } = createSheetRequestSchema.parse({ ...demo.sheet, processId: profileId });
+      const sheet = await manager
+        .getRepository(SheetEntity)
+        .save(manager.create(SheetEntity, { ...fields, ...budgetColumns({ leakageBudget, offsetBudgets }), projectId, processVersionId: process.versionId }));
       for (const [position, input] of demo.devices.entries()) {
         const targets = deviceTargetsSchema.parse(input);
         const computation = computeDevice(targets, sheet, process);

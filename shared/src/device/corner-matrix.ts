@@ -2,6 +2,7 @@ import { MATRIX_FIGURE_INFO, MATRIX_FIGURES, type DeviceLimit, type MatrixCell, 
 import type { CornersResponse } from '../schemas/corners.js';
 import { cornerNames, type Process } from '../schemas/process.js';
 import { computeCorners } from './compute.js';
+import { isEngineError } from './errors.js';
 import { temperaturesOf } from './corners.js';
 import { limitMargin, limitStatus } from './limit-status.js';
 import { cornersRequestOf, type SizedDevice } from './sized-device.js';
@@ -35,7 +36,7 @@ export function matrixColumns(process: Process, options: { corners?: readonly st
  * and the worst cell of the row for each figure. `processId` names the process for the request (the
  * definition given is what is computed with).
  */
-export function cornerMatrixRow(process: Process, processId: string, device: MatrixDevice, bias: 'current' | 'voltage', columns: readonly MatrixColumn[]): { cells: MatrixCell[]; worst: Record<MatrixFigure, WorstCell | null> } {
+export function cornerMatrixRow(process: Process, processId: string, device: MatrixDevice, bias: 'current' | 'voltage', columns: readonly MatrixColumn[]): MatrixRowCells {
   const cells: MatrixCell[] = new Array(columns.length);
   for (const vdd of new Set(columns.map((c) => c.vdd))) {
     const indices = columns.flatMap((column, index) => (column.vdd === vdd ? [index] : []));
@@ -52,11 +53,11 @@ export function cornerMatrixRow(process: Process, processId: string, device: Mat
   return { cells, worst: worstCells(cells, device.limits) };
 }
 
-function cellOf(point: CornerPoint | undefined, device: MatrixDevice): MatrixCell {
+function cellOf(point: CornerPoint | undefined, device: MatrixDevice, refusal?: { code: string; message: string }): MatrixCell {
   const op = point?.op ?? null;
   const values = Object.fromEntries(MATRIX_FIGURES.map((figure) => [figure, op ? figureOf(op, figure, device) : null])) as Record<MatrixFigure, number | null>;
   const status = Object.fromEntries(MATRIX_FIGURES.map((figure) => [figure, limitStatus(values[figure], device.limits.find((l) => l.figure === figure))])) as MatrixCell['status'];
-  const error = op ? undefined : (point?.error ?? { code: 'INTERNAL_ERROR', message: 'No answer at this point' });
+  const error = op ? undefined : (refusal ?? point?.error ?? { code: 'INTERNAL_ERROR', message: 'No answer at this point' });
   return { values, status, warnings: (point?.warnings ?? []).map((w) => w.code), ...(error ? { error } : {}) };
 }
 
@@ -100,4 +101,25 @@ export function worstCells(cells: readonly MatrixCell[], limits: readonly Device
     worst[figure] = chosen < 0 ? null : { column: chosen, value: cells[chosen].values[figure], status: cells[chosen].error ? 'fail' : limitStatus(cells[chosen].values[figure], limit) };
   }
   return worst;
+}
+
+export interface MatrixRowCells {
+  cells: MatrixCell[];
+  worst: Record<MatrixFigure, WorstCell | null>;
+}
+
+/**
+ * cornerMatrixRow for each device; a device the process cannot compute at all (a flavour it lacks, L below
+ * its lmin after a move to another version) gets a row whose every cell carries the engine's reason.
+ */
+export function cornerMatrixRows(process: Process, processId: string, devices: readonly MatrixDevice[], bias: 'current' | 'voltage', columns: readonly MatrixColumn[]): MatrixRowCells[] {
+  return devices.map((device) => {
+    try {
+      return cornerMatrixRow(process, processId, device, bias, columns);
+    } catch (error) {
+      if (!isEngineError(error)) throw error;
+      const cells: MatrixCell[] = columns.map(() => cellOf(undefined, device, { code: error.code, message: error.message }));
+      return { cells, worst: worstCells(cells, device.limits) };
+    }
+  });
 }

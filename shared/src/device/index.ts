@@ -90,7 +90,7 @@ export { voltageNames } from './say.js';
 
 // Analyses of a whole sheet, through the public calls above (so they follow whatever model a device uses).
 export { type SizedDevice, cornersRequestOf } from './sized-device.js';
-export { type MatrixDevice, matrixColumns, cornerMatrixRow, worstCells } from './corner-matrix.js';
+export { type MatrixDevice, type MatrixRowCells, matrixColumns, cornerMatrixRow, cornerMatrixRows, worstCells } from './corner-matrix.js';
 export { limitMargin, limitStatus, TIGHT_FRACTION } from './limit-status.js';
 export { extremeCorner } from './extreme-corner.js';
 export { type LeakageDevice, sheetLeakage, leakageTemperatures } from './leakage-budget.js';

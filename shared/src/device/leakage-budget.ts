@@ -3,6 +3,7 @@ import { cornerNames, type Process } from '../schemas/process.js';
 import type { DeviceLeakage, LeakageTerms, SheetLeakage } from '../schemas/sheet-leakage.js';
 import type { LeakageBudget } from '../schemas/sheets.js';
 import { computeCorners } from './compute.js';
+import { isEngineError } from './errors.js';
 import { extremeCorner } from './extreme-corner.js';
 import { cornersRequestOf, type SizedDevice } from './sized-device.js';
 
@@ -57,19 +58,29 @@ function termsOf(point: Point | undefined, multiplier: number): LeakageTerms | n
  * it through computeCorners, at every temperature of `leakageTemperatures` at the fast corner and at every
  * corner at the budget's temperature (the hottest of the range without a budget), × multiplier; the sheet's
  * total per temperature and per corner; the worst corner against the budget. A depletion-mode device (it
- * conducts at VGS = 0) is listed apart with its channel current, not counted.
+ * conducts at VGS = 0) is listed apart with its channel current, not counted; one the process cannot compute
+ * (a flavour it lacks …) is skipped with the engine's reason.
  */
-export function sheetLeakage(process: Process, processId: string, devices: readonly LeakageDevice[], budget: LeakageBudget | null, engineVersion: string): Omit<SheetLeakage, 'skipped'> {
+export function sheetLeakage(process: Process, processId: string, devices: readonly LeakageDevice[], budget: LeakageBudget | null, engineVersion: string): SheetLeakage {
   const budgetTemperature = budget?.temperature ?? process.tempRange?.max ?? process.tnom;
   const temperatures = leakageTemperatures(process, budgetTemperature);
   const fastCorner = extremeCorner(process, 'fastest');
   const corners = cornerNames(process);
   const rows: DeviceLeakage[] = [];
   const conducting: SheetLeakage['conducting'] = [];
+  const skipped: SheetLeakage['skipped'] = [];
   for (const device of devices) {
     const request = cornersRequestOf(processId, device, { bias: 'voltage', vgs: device.vgs });
-    const hot = computeCorners({ ...request, corners: [fastCorner], temperatures }, process).points;
-    const atBudgetPoints = computeCorners({ ...request, corners, temperatures: [budgetTemperature] }, process).points;
+    let hot: Point[];
+    let atBudgetPoints: Point[];
+    try {
+      hot = computeCorners({ ...request, corners: [fastCorner], temperatures }, process).points;
+      atBudgetPoints = computeCorners({ ...request, corners, temperatures: [budgetTemperature] }, process).points;
+    } catch (error) {
+      if (!isEngineError(error)) throw error;
+      skipped.push({ deviceId: device.key, name: device.name, reason: error.message });
+      continue;
+    }
     const conductsAt = [...hot, ...atBudgetPoints].find((p) => p.op?.leakage.conductsAtZeroVgs);
     if (conductsAt?.op) {
       const hottest = hot.findLast((p) => p.op !== null) ?? conductsAt;
@@ -102,5 +113,6 @@ export function sheetLeakage(process: Process, processId: string, devices: reado
     worst,
     withinBudget: budget ? worst.total <= budget.current : null,
     conducting,
+    skipped,
   };
 }

@@ -17,6 +17,8 @@ export interface SheetCsvReading {
   /** By row (line of the file) and field (the column's title). */
   problems: Problem[];
   ignoredColumns: string[];
+  /** The target columns the file has (a row updates only these fields of a device it names). */
+  columns: SheetCsvColumn[];
   delimiter: ',' | ';';
 }
 
@@ -46,12 +48,12 @@ function normalise(text: string): string {
 export function readSheetCsv(raw: string): SheetCsvReading {
   const { text, headerLine, delimiter } = prepareCsvText(raw);
   const problems: Problem[] = [];
-  if (headerLine === 0) return { rows: [], problems: [{ row: 1, field: 'file', message: 'The file has no header row' }], ignoredColumns: [], delimiter };
+  if (headerLine === 0) return { rows: [], problems: [{ row: 1, field: 'file', message: 'The file has no header row' }], ignoredColumns: [], columns: [], delimiter };
   const parsed = Papa.parse<string[]>(text, { delimiter, skipEmptyLines: false });
   const lineOf = lineNumbers(text, parsed.data.length);
   const headerIndex = lineOf.findIndex((line) => line >= headerLine);
   const header = readHeader(parsed.data[headerIndex] ?? [], headerLine, problems);
-  if (!header) return { rows: [], problems, ignoredColumns: [], delimiter };
+  if (!header) return { rows: [], problems, ignoredColumns: [], columns: [], delimiter };
   const rows: SheetCsvRow[] = [];
   const seen = new Map<string, number>();
   for (let i = headerIndex + 1; i < parsed.data.length; i++) {
@@ -72,7 +74,8 @@ export function readSheetCsv(raw: string): SheetCsvReading {
   for (const error of parsed.errors) {
     if (error.row !== undefined) problems.push({ row: lineOf[error.row] ?? headerLine, field: 'file', message: `${error.message} (put a double quote at both ends of a cell)` });
   }
-  return { rows, problems: problems.toSorted((a, b) => (a.row ?? 0) - (b.row ?? 0)), ignoredColumns: header.ignored, delimiter };
+  const columns = header.columns.flatMap((column) => (column ? [column.info.key as SheetCsvColumn] : []));
+  return { rows, problems: problems.toSorted((a, b) => (a.row ?? 0) - (b.row ?? 0)), ignoredColumns: header.ignored, columns, delimiter };
 }
 
 /** The line of the file each parsed record starts on. */
@@ -228,7 +231,8 @@ function readConstraint(text: string, filled: (c: DeviceConstraint) => boolean):
 
 /** A cell's number in SI: a plain number in the header's unit, or a number with its own prefix or unit. */
 function readNumber(text: string, column: HeaderColumn, delimiter: string): number | string {
-  const decimal = delimiter === ';' && /^[+\-−]?\d+,\d+$/.test(text) ? text.replace(',', '.') : text;
+  // A file separated by semicolons comes from a spreadsheet that writes decimal commas: 0,5 and 0,5u are 0.5.
+  const decimal = delimiter === ';' ? text.replace(/^([+\-−]?\d+),(\d)/, '$1.$2') : text;
   if (PLAIN_NUMBER.test(decimal)) return Number(decimal.replace(/−/g, '-')) * column.scale;
   const unit = column.info.unit === 'degC' ? '°C' : (column.info.unit ?? '');
   const parsed = parseQuantity(decimal, unit);

@@ -104,7 +104,6 @@ export const exportQuerySchema = z.object({
   metadata: z.enum(['comments', 'none'], { error: 'metadata must be "comments" or "none"' }).default('comments'),
   lengths: z.enum(['m', 'um'], { error: 'lengths must be "m" or "um"' }).default('m'),
   fingers: z.enum(['nf', 'omit'], { error: 'fingers must be "nf" or "omit"' }).default('nf'),
-  revision: z.string().trim().min(1).max(200).optional().describe('spice: name this revision (its label and hash) in the header; the sheet\'s latest revision when absent'),
 });
 export type ExportQuery = z.infer<typeof exportQuerySchema>;
 
