@@ -5,7 +5,7 @@ import { computeCorners } from './compute.js';
 import { isEngineError } from './errors.js';
 import { temperaturesOf } from './corners.js';
 import { limitMargin, limitStatus } from './limit-status.js';
-import { cornersRequestOf, type SizedDevice } from './sized-device.js';
+import { cornersRequestOf, type CornersCall, type SizedDevice } from './sized-device.js';
 
 type CornerPoint = CornersResponse['points'][number];
 
@@ -32,19 +32,27 @@ export function matrixColumns(process: Process, options: { corners?: readonly st
 /**
  * One row of the corner matrix: the device (W and L fixed) at every column, each cell exactly what
  * computeCorners answers for that device, corner and temperature on the process at the column's supply (so
- * it follows whatever model the device uses), read into the matrix figures and checked against its limits;
+ * it follows whatever model the device uses; `corners` binds what that model needs beyond the process), read
+ * into the matrix figures and checked against its limits;
  * and the worst cell of the row for each figure. `processId` names the process for the request (the
  * definition given is what is computed with).
  */
-export function cornerMatrixRow(process: Process, processId: string, device: MatrixDevice, bias: 'current' | 'voltage', columns: readonly MatrixColumn[]): MatrixRowCells {
+export function cornerMatrixRow(
+  process: Process,
+  processId: string,
+  device: MatrixDevice,
+  bias: 'current' | 'voltage',
+  columns: readonly MatrixColumn[],
+  corners: CornersCall = computeCorners,
+): MatrixRowCells {
   const cells: MatrixCell[] = new Array(columns.length);
   for (const vdd of new Set(columns.map((c) => c.vdd))) {
     const indices = columns.flatMap((column, index) => (column.vdd === vdd ? [index] : []));
-    const corners = [...new Set(indices.map((i) => columns[i].corner))];
+    const names = [...new Set(indices.map((i) => columns[i].corner))];
     const temperatures = [...new Set(indices.map((i) => columns[i].temperature))];
     const held = bias === 'current' ? { bias, id: device.reference.id } : { bias, vgs: device.reference.vgs };
-    const answer = computeCorners(
-      { ...cornersRequestOf(processId, device, held), corners, temperatures },
+    const answer = corners(
+      { ...cornersRequestOf(processId, device, held), corners: names, temperatures },
       vdd === process.vdd ? process : { ...process, vdd },
     );
     const byPlace = new Map(answer.points.map((point) => [`${point.corner}\n${point.temperature}`, point]));
@@ -112,10 +120,17 @@ export interface MatrixRowCells {
  * cornerMatrixRow for each device; a device the process cannot compute at all (a flavour it lacks, L below
  * its lmin after a move to another version) gets a row whose every cell carries the engine's reason.
  */
-export function cornerMatrixRows(process: Process, processId: string, devices: readonly MatrixDevice[], bias: 'current' | 'voltage', columns: readonly MatrixColumn[]): MatrixRowCells[] {
+export function cornerMatrixRows(
+  process: Process,
+  processId: string,
+  devices: readonly MatrixDevice[],
+  bias: 'current' | 'voltage',
+  columns: readonly MatrixColumn[],
+  corners: CornersCall = computeCorners,
+): MatrixRowCells[] {
   return devices.map((device) => {
     try {
-      return cornerMatrixRow(process, processId, device, bias, columns);
+      return cornerMatrixRow(process, processId, device, bias, columns, corners);
     } catch (error) {
       if (!isEngineError(error)) throw error;
       const cells: MatrixCell[] = columns.map(() => cellOf(undefined, device, { code: error.code, message: error.message }));

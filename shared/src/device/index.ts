@@ -89,7 +89,7 @@ export { sizePlausibilityWarnings, SIZE_PLAUSIBILITY } from './size-plausibility
 export { voltageNames } from './say.js';
 
 // Analyses of a whole sheet, through the public calls above (so they follow whatever model a device uses).
-export { type SizedDevice, cornersRequestOf } from './sized-device.js';
+export { type SizedDevice, type CornersCall, cornersRequestOf } from './sized-device.js';
 export { type MatrixDevice, type MatrixRowCells, matrixColumns, cornerMatrixRow, cornerMatrixRows, worstCells } from './corner-matrix.js';
 export { limitMargin, limitStatus, TIGHT_FRACTION } from './limit-status.js';
 export { extremeCorner } from './extreme-corner.js';

@@ -5,7 +5,7 @@ import type { LeakageBudget } from '../schemas/sheets.js';
 import { computeCorners } from './compute.js';
 import { isEngineError } from './errors.js';
 import { extremeCorner } from './extreme-corner.js';
-import { cornersRequestOf, type SizedDevice } from './sized-device.js';
+import { cornersRequestOf, type CornersCall, type SizedDevice } from './sized-device.js';
 
 /** A sized device of a sheet as the leakage budget reads it. */
 export interface LeakageDevice extends SizedDevice {
@@ -61,11 +61,18 @@ function termsOf(point: Point | undefined, multiplier: number): LeakageTerms | n
  * conducts at VGS = 0) is listed apart with its channel current, not counted; one the process cannot compute
  * (a flavour it lacks …) is skipped with the engine's reason.
  */
-export function sheetLeakage(process: Process, processId: string, devices: readonly LeakageDevice[], budget: LeakageBudget | null, engineVersion: string): SheetLeakage {
+export function sheetLeakage(
+  process: Process,
+  processId: string,
+  devices: readonly LeakageDevice[],
+  budget: LeakageBudget | null,
+  engineVersion: string,
+  corners: CornersCall = computeCorners,
+): SheetLeakage {
   const budgetTemperature = budget?.temperature ?? process.tempRange?.max ?? process.tnom;
   const temperatures = leakageTemperatures(process, budgetTemperature);
   const fastCorner = extremeCorner(process, 'fastest');
-  const corners = cornerNames(process);
+  const cornerList = cornerNames(process);
   const rows: DeviceLeakage[] = [];
   const conducting: SheetLeakage['conducting'] = [];
   const skipped: SheetLeakage['skipped'] = [];
@@ -74,8 +81,8 @@ export function sheetLeakage(process: Process, processId: string, devices: reado
     let hot: Point[];
     let atBudgetPoints: Point[];
     try {
-      hot = computeCorners({ ...request, corners: [fastCorner], temperatures }, process).points;
-      atBudgetPoints = computeCorners({ ...request, corners, temperatures: [budgetTemperature] }, process).points;
+      hot = corners({ ...request, corners: [fastCorner], temperatures }, process).points;
+      atBudgetPoints = corners({ ...request, corners: cornerList, temperatures: [budgetTemperature] }, process).points;
     } catch (error) {
       if (!isEngineError(error)) throw error;
       skipped.push({ deviceId: device.key, name: device.name, reason: error.message });
@@ -94,12 +101,12 @@ export function sheetLeakage(process: Process, processId: string, devices: reado
       name: device.name,
       multiplier: device.multiplier,
       atFastCorner: temperatures.map((t) => termsOf(hot.find((p) => p.temperature === t), device.multiplier)),
-      atBudget: corners.map((corner) => ({ corner, total: termsOf(atBudgetPoints.find((p) => p.corner === corner), device.multiplier)?.total ?? null })),
+      atBudget: cornerList.map((corner) => ({ corner, total: termsOf(atBudgetPoints.find((p) => p.corner === corner), device.multiplier)?.total ?? null })),
       estimates: [...estimates],
     });
   }
   const totals = temperatures.map((_, i) => rows.reduce((sum, row) => sum + (row.atFastCorner[i]?.total ?? 0), 0));
-  const byCorner = corners.map((corner, i) => ({ corner, total: rows.reduce((sum, row) => sum + (row.atBudget[i].total ?? 0), 0) }));
+  const byCorner = cornerList.map((corner, i) => ({ corner, total: rows.reduce((sum, row) => sum + (row.atBudget[i].total ?? 0), 0) }));
   const worst = byCorner.reduce((a, b) => (b.total > a.total ? b : a));
   return {
     engineVersion,

@@ -1,4 +1,5 @@
-import type { CornersRequestInput } from '../schemas/corners.js';
+import type { CornersRequestInput, CornersResponse } from '../schemas/corners.js';
+import type { Process } from '../schemas/process.js';
 import type { Polarity } from '../schemas/process.js';
 import type { Model } from '../schemas/request-fields.js';
 
@@ -28,3 +29,10 @@ export function cornersRequestOf(processId: string, device: SizedDevice, held: {
     ...held,
   };
 }
+
+/**
+ * The engine call the sheet analyses make for each device: computeCorners by default. A caller whose devices
+ * need more than the process to be computed (a model that reads stored tables) passes the same call with
+ * that data bound, so the analyses follow whatever model a device uses.
+ */
+export type CornersCall = (request: CornersRequestInput, process: Process) => CornersResponse;
