@@ -55,7 +55,7 @@ export function storedDevice(id: string, position: number, input: DeviceTargetsI
     sizeRequest,
     result,
     error,
-    computedWith: { engineVersion: '1.0.0', processVersionId: 'v-bf180g-2', processVersion: 2, computedAt: '2025-03-05T09:00:00.000Z' },
+    computedWith: { engineVersion: '1.0.0', processVersionId: 'v-bf180g-2', processVersion: 2, processName: 'BF180-G', computedAt: '2025-03-05T09:00:00.000Z' },
     stale,
     staleReasons: stale ? ['process'] : [],
     createdAt: '2025-03-05T09:00:00.000Z',

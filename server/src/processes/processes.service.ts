@@ -42,6 +42,7 @@ export interface ResolvedProcess {
 /** A process version as other modules show it: its number, and its profile's newest. */
 export interface VersionFacts {
   profileId: string;
+  profileName: string;
   number: number;
   latestVersion: number;
 }
@@ -218,7 +219,7 @@ export class ProcessesService {
     const ids = [...new Set(versionIds)];
     if (ids.length === 0) return new Map();
     const rows = await manager.getRepository(ProcessVersionEntity).find({ where: { id: In(ids) }, relations: { profile: true } });
-    return new Map(rows.map((row) => [row.id, { profileId: row.profileId, number: row.number, latestVersion: row.profile.latestVersion }]));
+    return new Map(rows.map((row) => [row.id, { profileId: row.profileId, profileName: row.profile.name, number: row.number, latestVersion: row.profile.latestVersion }]));
   }
 
   /** The id of the profile with this name (any case), or null. */

@@ -23,8 +23,8 @@ export interface LoadedSheet {
   /** The newest version of the sheet's profile. */
   latestVersion: number;
   devices: DeviceEntity[];
-  /** Version number of every process version id the devices were computed on. */
-  versionNumbers: ReadonlyMap<string, number>;
+  /** Version number and profile name of every process version id the devices were computed on. */
+  versionNumbers: ReadonlyMap<string, { number: number; name: string }>;
 }
 
 /** Why a stored result is stale: another engine version, or another process version than the sheet's. */
@@ -60,7 +60,8 @@ export function toDevice(device: DeviceEntity, loaded: Pick<LoadedSheet, 'sheet'
     computedWith: {
       engineVersion: device.engineVersion,
       processVersionId: device.processVersionId,
-      processVersion: loaded.versionNumbers.get(device.processVersionId) ?? 0,
+      processVersion: loaded.versionNumbers.get(device.processVersionId)?.number ?? 0,
+      processName: loaded.versionNumbers.get(device.processVersionId)?.name ?? loaded.process.name,
       computedAt: device.computedAt.toISOString(),
     },
     stale: staleReasons.length > 0,

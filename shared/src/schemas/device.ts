@@ -14,7 +14,8 @@ import { sizeRequestSchema, sizeResponseSchema } from './size.js';
 export const computedWithSchema = z.object({
   engineVersion: z.string(),
   processVersionId: z.string(),
-  processVersion: z.number().int().describe('The version number of the sheet\'s process profile'),
+  processVersion: z.number().int().describe('The version number of the process profile the result was computed on'),
+  processName: z.string().describe('The name of that process profile (another than the sheet\'s after a move)'),
   computedAt: z.string(),
 });
 export type ComputedWith = z.infer<typeof computedWithSchema>;

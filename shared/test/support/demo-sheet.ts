@@ -48,7 +48,7 @@ export function demoDevices(inputs: readonly DeviceTargetsInput[] = INPUTS): Dev
       sizeRequest,
       result,
       error,
-      computedWith: { engineVersion: 'test', processVersionId: 'v1', processVersion: 1, computedAt: '2030-01-01T00:00:00.000Z' },
+      computedWith: { engineVersion: 'test', processVersionId: 'v1', processVersion: 1, processName: 'BF180-G', computedAt: '2030-01-01T00:00:00.000Z' },
       stale: false,
       staleReasons: [],
       createdAt: '2030-01-01T00:00:00.000Z',
