@@ -10,6 +10,8 @@ export default mergeConfig(
       setupFiles: ['./src/test/setup.ts'],
       css: false,
       restoreMocks: true,
+      // See src/test/setup.ts: on a loaded two-core machine a route test can take more than the default 5 s.
+      testTimeout: 30_000,
     },
   }),
 );
