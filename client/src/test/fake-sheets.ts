@@ -87,6 +87,8 @@ export function storedSheet(devices: Device[]): Sheet {
     temperature: null,
     corner: 'TT',
     model: 'all-region',
+    leakageBudget: null,
+    offsetBudgets: [],
     version: 1,
     deviceCount: devices.length,
     staleCount,

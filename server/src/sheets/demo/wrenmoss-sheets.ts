@@ -19,11 +19,11 @@ const biasGenerator: DemoSheet = {
     description: 'Invented demo data. Constant-gm style reference: NMOS pair with a degenerated side, PMOS mirror, cascodes whose sources sit above the body, a start-up device and a native start-up current source.',
   },
   devices: [
-    { name: 'MN1', function: 'reference diode (constant-gm core)', polarity: 'nmos', id: 5 * µ, l: 2 * µ, vds: 0.55, vov: 0.12, matchGroup: 'core NMOS', limits: [{ figure: 'headroom', min: 0.05 }] },
+    { name: 'MN1', function: 'reference diode (constant-gm core)', polarity: 'nmos', id: 5 * µ, l: 2 * µ, vds: 0.55, vov: 0.12, matchGroup: 'core NMOS', limits: [{ figure: 'headroom', min: 0.35 }], notes: 'Keep 350 mV between VDS and VDSsat: the core must stay saturated as the supply droops.' },
     { name: 'MN2', function: 'degenerated side of the core, 4× wider', polarity: 'nmos', id: 5 * µ, l: 2 * µ, vds: 0.45, vov: 0.06, multiplier: 4, matchGroup: 'core NMOS', notes: 'Source on the degeneration resistor: sized with four parallel devices.' },
     { name: 'MN3', function: 'cascode of the reference branch', polarity: 'nmos', id: 5 * µ, l: 1 * µ, vds: 0.4, vsb: 0.55, vov: 0.15, notes: 'Source above the body: the body effect raises VT.' },
     { name: 'MN4', function: 'cascode of the output branch', polarity: 'nmos', id: 5 * µ, l: 1 * µ, vds: 0.4, vsb: 0.45, vov: 0.15 },
-    { name: 'MP1', function: 'PMOS mirror, reference branch', polarity: 'pmos', id: 5 * µ, l: 2 * µ, vds: 0.5, vov: 0.2, matchGroup: 'bias PMOS mirror', supplyBranch: true, limits: [{ figure: 'headroom', min: 0.05 }] },
+    { name: 'MP1', function: 'PMOS mirror, reference branch', polarity: 'pmos', id: 5 * µ, l: 2 * µ, vds: 0.5, vov: 0.2, matchGroup: 'bias PMOS mirror', supplyBranch: true, limits: [{ figure: 'headroom', min: 0.25 }, { figure: 'vgs', max: 1.1 }] },
     { name: 'MP2', function: 'PMOS mirror, output branch', polarity: 'pmos', id: 5 * µ, l: 2 * µ, vds: 0.5, vov: 0.2, matchGroup: 'bias PMOS mirror', supplyBranch: true },
     { name: 'MS1', function: 'start-up device (off once the core runs)', polarity: 'nmos', id: 100 * n, l: 1 * µ, vds: 1.0, gmId: 27, notes: 'Weak inversion: it only has to pull the core out of the zero-current state.' },
     { name: 'MNAT', function: 'native start-up current source', polarity: 'nmos', flavour: 'native', id: 1 * µ, l: 2 * µ, vds: 0.5, vgs: 0, supplyBranch: true, notes: 'Depletion-mode native NMOS with its gate at its source: conducts at VGS = 0.' },
