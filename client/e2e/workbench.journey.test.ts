@@ -86,8 +86,10 @@ describeJourney('sizing devices on a sheet', (journey) => {
 
     await resultsSettled(page, 'all-region · TT · 27 °C');
     const w = await quantityIn(resultCell(page, 'Geometry', 'W'), 'm');
+    // Plausibility only (the engine's own tests check the width against published equations): the
+    // all-region model with the bulk-charge factor 1/n puts 20 µA at VOV = 0.2 V, L = 0.5 µm near 2 µm.
     expect(w).toBeGreaterThan(1e-6);
-    expect(w).toBeLessThan(2e-6);
+    expect(w).toBeLessThan(3e-6);
     expect(await quantityIn(resultCell(page, 'Bias', 'VOV'), 'V')).toBeCloseTo(0.2, 3);
     // The warnings region answers either way: a list of cautions, or that there are none.
     await page.getByLabel('Warnings').first().waitFor();

@@ -75,7 +75,7 @@ describe('sheets and devices: stored results, edits and bad input', () => {
       const fixed = deviceSchema.parse((await t.http().patch(`/api/sheets/${sheet.id}/devices/${refused.id}`).set(bearer(tokens.designer)).send({ version: refused.version, gmId: 15 }).expect(200)).body);
       expect(fixed).toMatchObject({ error: null, constraint: 'gmId', version: 2 });
       // Within what snapping W to the grid moves it.
-      expect(fixed.result!.gmId).toBeCloseTo(15, 3);
+      expect(fixed.result!.gmId).toBeCloseTo(15, 2);
       expect((await getSheet(sheet.id)).totals.failedDeviceIds).not.toContain(refused.id);
     });
 

@@ -29,8 +29,9 @@ function stringsInTheSource(): string[] {
 
 describe('the signing key of a server started without JWT_SECRET, as `npm start` starts it', () => {
   const dataDir = mkdtempSync(join(tmpdir(), 'channelwright-key-'));
-  // What main.ts reads from a shell with nothing set but where to keep the data: development mode, demo seeded.
-  const env = { DATA_DIR: dataDir, CLIENT_DIST: join(dataDir, 'no-client-build') };
+  // What main.ts reads from a shell with nothing set but where to keep the data: development mode, demo seeded (its
+  // characterisation, which would only load the machine while this runs, left out).
+  const env = { DATA_DIR: dataDir, CLIENT_DIST: join(dataDir, 'no-client-build'), DEMO_CHARACTERISATION: 'false' };
   let app: NestExpressApplication;
   let adminId: string;
   const http = () => request(app.getHttpServer());

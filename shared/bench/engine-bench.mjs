@@ -74,10 +74,10 @@ function bareLoop() {
   const { beta, n, ut, lambda, vt, vds } = constants;
   const a = 2 * n * ut;
   const m = 1 + lambda * vds;
-  const p = 0.5 * beta * a * a;
+  const p = (0.5 * beta * a * a) / n;
   for (let i = 0; i < POINTS; i++) {
     const xf = (vgs[i] - vt) / a;
-    const xr = xf - vds / a;
+    const xr = xf - (n * vds) / a;
     let lf, sf, lr, sr;
     if (xf > 0) {
       const t = Math.exp(-xf);
@@ -101,7 +101,7 @@ function bareLoop() {
     const slope = lf * sf - lr * sr;
     id[i] = p * m * d;
     gm[i] = (p * m * 2 * slope) / a;
-    gds[i] = p * ((m * 2 * lr * sr) / a + lambda * d);
+    gds[i] = p * ((m * lr * sr) / ut + lambda * d);
     gmId[i] = (2 * slope) / (a * d);
   }
 }

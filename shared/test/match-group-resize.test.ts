@@ -29,11 +29,12 @@ describe('resizeMatchGroup', () => {
   };
 
   it('meets a tighter offset with the engine\'s own sizes, within 1 % under the target, at the same gm/ID', () => {
-    const plan = resizeMatchGroup([member(), member()], 2e-3, sizer);
-    expect(plan.before.sigmaVos).toBeGreaterThan(2e-3);
+    // The 2.0 model sizes this pair wider than the budget's 2 mV needs (1.63 mV), so ask for 1.2 mV.
+    const plan = resizeMatchGroup([member(), member()], 1.2e-3, sizer);
+    expect(plan.before.sigmaVos).toBeGreaterThan(1.2e-3);
     expect(plan.meetsTarget).toBe(true);
-    expect(plan.after.sigmaVos).toBeLessThanOrEqual(2e-3);
-    expect(plan.after.sigmaVos).toBeGreaterThan(0.99 * 2e-3);
+    expect(plan.after.sigmaVos).toBeLessThanOrEqual(1.2e-3);
+    expect(plan.after.sigmaVos).toBeGreaterThan(0.99 * 1.2e-3);
     for (const size of plan.sizes) expect(size.gmId).toBeCloseTo(16, 2);
     // The area the closed form asks for, within the width grid and the change of λ with L.
     expect(plan.sizes[0].w * plan.sizes[0].l).toBeGreaterThan(0.97 * plan.requiredArea);

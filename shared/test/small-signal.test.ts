@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { drainCurrent, inversionCoefficient, regionOf, saturationVoltage, smallSignal, thermalVoltage } from '../src/device/index.js';
+import { drainCurrent, gmbRatioOf, inversionCoefficient, regionOf, saturationVoltage, slopeFactor, smallSignal, thermalVoltage } from '../src/device/index.js';
 
 const ut = thermalVoltage(300);
 const beta = 1e-3;
@@ -14,13 +14,20 @@ describe('gm/ID', () => {
     expect(smallSignal('all-region', beta, 1, ut, 0, -1, 1, 0).gmId).toBeCloseTo(38.682, 2);
   });
 
-  it('tends to 2/VOV in strong inversion (square law; Shichman & Hodges 1968)', () => {
-    expect(smallSignal('all-region', beta, n, ut, 0, 1, 5, 0).gmId).toBeCloseTo(2, 4);
+  it('is 2/VOV for the square law (Shichman & Hodges 1968) and tends to it for the all-region model in strong inversion', () => {
     expect(smallSignal('square-law', beta, n, ut, 0, 0.25, 5, 0).gmId).toBe(8);
+    const ratio = (vov: number) => smallSignal('all-region', beta, n, ut, 0, vov, 10, 0).gmId / (2 / vov);
+    expect(Math.abs(ratio(1) - 1)).toBeLessThan(0.05);
+    expect(Math.abs(ratio(3) - 1)).toBeLessThan(Math.abs(ratio(1) - 1));
   });
 
-  it('is 1/(2nUT·ln 2) at VOV = 0 for the all-region interpolation', () => {
-    expect(smallSignal('all-region', beta, n, ut, 0, 0, 5, 0).gmId).toBeCloseTo(1 / (2 * n * ut * Math.LN2), 8);
+  it('follows the charge-based relation gm·nUT/ID = 1/(1 + q) = 1/(0.5 + √(0.25 + IC)) in saturation (Enz & Vittoz 2006)', () => {
+    for (const vov of [-0.2, 0, 0.1, 0.3, 0.8]) {
+      const s = smallSignal('all-region', beta, n, ut, 0, vov, 5, 0);
+      expect(s.gmId * n * ut).toBeCloseTo(1 / (0.5 + Math.sqrt(0.25 + s.ic)), 9);
+    }
+    // At VOV = 0: 2q + ln q = 0, q = W(2)/2 = 0.426302751 (Lambert W of 2, 0.852605502; from memory), gm·nUT/ID = 1/(1 + q).
+    expect(smallSignal('all-region', beta, n, ut, 0, 0, 5, 0).gmId * n * ut).toBeCloseTo(1 / 1.426302751, 8);
   });
 });
 
@@ -85,9 +92,11 @@ describe('analytic derivatives', () => {
 });
 
 describe('saturationVoltage', () => {
-  it('is VOV in strong inversion and a few UT (4nUT) in weak inversion, smoothly between', () => {
-    expect(saturationVoltage('all-region', 0.8, n, ut)).toBeCloseTo(0.8, 5);
-    expect(saturationVoltage('all-region', -1, n, ut)).toBeCloseTo(4 * n * ut, 6);
+  it('is V_P/n = 2UT·q in strong inversion (the pinch-off voltage over n, → VOV/n; Tsividis & McAndrew 2011, ch. 4) and 4UT in weak inversion, smoothly between', () => {
+    const strong = saturationVoltage('all-region', 3, n, ut);
+    expect(strong / (3 / n)).toBeGreaterThan(0.95);
+    expect(strong).toBeLessThan(3 / n);
+    expect(saturationVoltage('all-region', -1, n, ut)).toBeCloseTo(4 * ut, 6);
     expect(saturationVoltage('square-law', 0.3, n, ut)).toBe(0.3);
     expect(saturationVoltage('square-law', -0.3, n, ut)).toBeCloseTo(4 * ut, 15);
     let previous = saturationVoltage('all-region', -0.5, n, ut);
@@ -101,5 +110,46 @@ describe('saturationVoltage', () => {
   it('marks a device saturated when VDS ≥ VDSsat', () => {
     expect(smallSignal('all-region', beta, n, ut, 0, 0.3, 0.5, 0).saturated).toBe(true);
     expect(smallSignal('all-region', beta, n, ut, 0, 0.3, 0.2, 0).saturated).toBe(false);
+  });
+});
+
+describe('consistency of the all-region model (Enz & Vittoz, Charge-Based MOS Transistor Modeling, Wiley, 2006)', () => {
+  it('has IC = 1 at the specific current: ID = I_spec = 2nβUT² where q² + q = 1, q = (√5 − 1)/2, VOV = nUT·(2q + ln q)', () => {
+    const q = (Math.sqrt(5) - 1) / 2;
+    const vov = n * ut * (2 * q + Math.log(q));
+    const s = smallSignal('all-region', beta, n, ut, 0, vov, 2, 0);
+    expect(s.id / (2 * n * beta * ut * ut)).toBeCloseTo(1, 10);
+    expect(s.ic).toBeCloseTo(1, 10);
+    expect(s.region).toBe('moderate');
+  });
+
+  it('puts gm/ID = 10 /V in moderate inversion at n = 1.3, 300 K: IC ≈ 5.9 by the charge-based relation gm·nUT/ID = 1/(0.5 + √(0.25 + IC))', () => {
+    // Solve VOV for gm/ID = 10 by bisection on the model itself.
+    let lo = -0.5;
+    let hi = 1;
+    for (let k = 0; k < 80; k++) {
+      const mid = (lo + hi) / 2;
+      if (smallSignal('all-region', beta, n, ut, 0, mid, 2, 0).gmId > 10) lo = mid;
+      else hi = mid;
+    }
+    const s = smallSignal('all-region', beta, n, ut, 0, lo, 2, 0);
+    const charge = 1 / (10 * n * ut) - 0.5;
+    const chargeBased = charge * charge - 0.25;
+    expect(chargeBased).toBeCloseTo(5.88, 1);
+    expect(s.ic / chargeBased).toBeCloseTo(1, 6);
+    expect(s.region).toBe('moderate');
+  });
+
+  it('gives gmb/gm = n − 1 at every VSB, also when the process states n', () => {
+    const derived = { gamma: 0.45, twoPhiF: 0.88 };
+    const given = { ...derived, n: 1.35 };
+    for (const vsb of [0, 0.4, 1.2]) {
+      expect(gmbRatioOf('all-region', derived, vsb)).toBeCloseTo(slopeFactor(derived, vsb) - 1, 15);
+      expect(gmbRatioOf('all-region', given, vsb)).toBeCloseTo(slopeFactor(given, vsb) - 1, 15);
+    }
+    // A given n falls with VSB as Cdep ∝ 1/√(2φF + VSB): at VSB = 1.2 V, n − 1 = 0.35·√(0.88/2.08).
+    expect(slopeFactor(given, 1.2) - 1).toBeCloseTo(0.35 * Math.sqrt(0.88 / 2.08), 12);
+    // The square law keeps SPICE level 1's dVT/dVSB.
+    expect(gmbRatioOf('square-law', given, 0.4)).toBeCloseTo(0.45 / (2 * Math.sqrt(1.28)), 15);
   });
 });

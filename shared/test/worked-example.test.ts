@@ -31,26 +31,31 @@ describe('the worked example of docs/model.md', () => {
     expect(result.warnings).toEqual([]);
   });
 
-  it('all-region: W = 1.605 µm, VGS = 0.71669 V, gm/ID = 9.491 /V, gm = 189.83 µS, IC = 13.30 (strong)', () => {
+  it('all-region: W = 2.030 µm, VGS = 0.71683 V, gm/ID = 8.640 /V, gm = 172.79 µS, IC = 10.52 (strong), VDSsat = 0.1679 V', () => {
     const result = computeSize(target, BF180G);
-    digits(result.wRequired, 1.605e-6, 5);
-    expect(result.w).toBe(1.605e-6);
-    digits(result.vgs, 0.71669, 5);
-    digits(result.gmId, 9.491, 4);
-    digits(result.gm, 189.83e-6, 5);
-    digits(result.ic, 13.3, 4);
+    digits(result.wRequired, 2.0324e-6, 5);
+    expect(result.w).toBe(2.03e-6);
+    digits(result.vgs, 0.71683, 5);
+    digits(result.gmId, 8.640, 4);
+    digits(result.gm, 172.79e-6, 5);
+    digits(result.ic, 10.52, 4);
     expect(result.region).toBe('strong');
+    digits(result.vdsat, 0.1679, 4);
+    digits(result.gds, 1.5267e-6, 4);
+    digits(result.gmb, 35.79e-6, 4);
   });
 
-  it('all-region: Cgs = 5.068 fF, Cgd = 0.5618 fF, fT = 5.367 GHz, pair σ(ΔVT) = 5.023 mV, Ioff ≈ 1.76 pA', () => {
+  it('all-region: Cgs = 5.434 fF, Cgd = 0.7105 fF, Cgb = 0.6564 fF, fT = 4.044 GHz, pair σ(ΔVT) = 4.467 mV, Ioff ≈ 1.799 pA', () => {
     const result = computeSize(target, BF180G);
-    digits(result.cgs, 5.068e-15, 4);
-    digits(result.cgd, 0.5618e-15, 4);
-    digits(result.ft, 5.367e9, 4);
-    digits(result.sigmaVt, 5.023e-3, 4);
-    digits(result.sigmaVtSingle, 3.552e-3, 4);
-    digits(result.ioff, 1.76e-12, 3);
-    digits(result.leakage.gate, 0.8e-18, 1);
-    digits(result.leakage.junction, 0.39e-15, 2);
+    digits(result.cgs, 5.434e-15, 4);
+    digits(result.cgd, 0.7105e-15, 4);
+    digits(result.cgb as number, 0.6564e-15, 4);
+    digits(result.cgg as number, 6.800e-15, 4);
+    digits(result.ft, 4.044e9, 4);
+    digits(result.sigmaVt, 4.467e-3, 4);
+    digits(result.sigmaVtSingle, 3.158e-3, 4);
+    digits(result.ioff, 1.799e-12, 4);
+    digits(result.leakage.gate, 8.44e-20, 3);
+    digits(result.leakage.junction, 4.872e-16, 4);
   });
 });

@@ -21,7 +21,7 @@ export const BF180G_SUMMARY: ProcessProfileSummary = {
 
 export const BF180G_PROFILE: ProcessProfile = {
   ...BF180G_SUMMARY,
-  version: { id: 'v-bf180g-2', number: 2, message: 'invented demo data', author: null, createdAt: '2025-03-02T09:00:00.000Z', definition: BF180G },
+  version: { id: 'v-bf180g-2', number: 2, message: 'invented demo data', author: null, createdAt: '2025-03-02T09:00:00.000Z', definition: BF180G, modelCardSha256: null, modelCard: null },
 };
 
 /** Runs an engine call the way the server does: a stored process for processId, an EngineError as a 400 naming its field. */

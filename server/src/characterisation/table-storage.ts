@@ -1,7 +1,7 @@
 import { createHash } from 'node:crypto';
 import { promisify } from 'node:util';
 import { gunzip, gzip } from 'node:zlib';
-import { decodeTable, encodeTable, type LookupTable } from '@channelwright/shared/device';
+import { decodeTable, encodeTableInSteps, type LookupTable } from '@channelwright/shared/device';
 import { shuffleBytes, unshuffleBytes } from './byte-shuffle.js';
 
 const compress = promisify(gzip);
@@ -31,9 +31,15 @@ export async function sha256Of(bytes: Uint8Array): Promise<string> {
   return hash.digest('hex');
 }
 
-/** Encodes, hashes, shuffles and compresses a table (zlib's gzip runs on libuv's thread pool, off the event loop). */
+/** Encodes (a column per turn of the event loop), hashes, shuffles and compresses a table (zlib's gzip runs on libuv's thread pool, off the event loop). */
 export async function packTable(table: LookupTable): Promise<PackedTable> {
-  const bytes = encodeTable(table);
+  const steps = encodeTableInSteps(table);
+  let step = steps.next();
+  while (!step.done) {
+    await new Promise((resolve) => setImmediate(resolve));
+    step = steps.next();
+  }
+  const bytes = step.value;
   const sha256 = await sha256Of(bytes);
   const compressed = await compress(await shuffleBytes(bytes, ELEMENT));
   return { compressed, sha256, size: bytes.length };

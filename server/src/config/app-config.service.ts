@@ -1,5 +1,5 @@
 import { Inject, Injectable } from '@nestjs/common';
-import type { AppConfig, NodeEnv } from './app-config.js';
+import type { AppConfig, CharacterisationConfig, NodeEnv } from './app-config.js';
 
 export const APP_CONFIG = Symbol('APP_CONFIG');
 
@@ -46,5 +46,8 @@ export class AppConfigService {
   }
   get trustProxyHops(): number {
     return this.config.trustProxyHops;
+  }
+  get characterisation(): CharacterisationConfig {
+    return this.config.characterisation;
   }
 }

@@ -23,4 +23,25 @@ export interface AppConfig {
   corsOrigins: string[];
   /** Proxies in front of the server whose X-Forwarded-For is believed (0: none), so sign-in limits count real client addresses. */
   trustProxyHops: number;
+  characterisation: CharacterisationConfig;
+}
+
+/** How characterisation jobs run (docs/characterisation.md). */
+export interface CharacterisationConfig {
+  /** Jobs run at once on this server. */
+  concurrency: number;
+  /** auto: Debian's ngspice when installed, else the WebAssembly build. */
+  engine: 'auto' | 'native' | 'wasm';
+  /** A request's grid (all devices together) may hold at most this many points. */
+  maxPoints: number;
+  /** A running job whose server has not reported for this long is taken over (resumed or failed). */
+  leaseSeconds: number;
+  /** Runs a job may start (a server stop interrupts one); beyond them it fails. */
+  maxAttempts: number;
+  /** Simulation worker threads; the machine's cores when undefined. */
+  threads?: number;
+  /** Decoded tables kept in memory, bytes. */
+  tableCacheBytes: number;
+  /** Characterise the demo processes in the background at first start (with the demo seed). */
+  demo: boolean;
 }

@@ -29,5 +29,13 @@ export const envSchema = z.object({
   CLIENT_DIST: z.string().default('client/dist'),
   CORS_ORIGINS: z.string().optional(),
   TRUST_PROXY: wholeNumber(0, 10, 'must be the number of proxies in front of the server (0 for none)').default(0),
+  CHARACTERISATION_CONCURRENCY: wholeNumber(1, 16, 'must be a whole number of characterisations run at once, from 1 to 16').default(1),
+  CHARACTERISATION_ENGINE: z.enum(['auto', 'native', 'wasm'], { error: 'must be auto (native ngspice when installed, else WebAssembly), native or wasm' }).default('auto'),
+  CHARACTERISATION_MAX_POINTS: wholeNumber(1000, 100_000_000, 'must be a whole number of grid points from 1000 to 100000000').default(5_000_000),
+  CHARACTERISATION_LEASE_SECONDS: wholeNumber(1, 3600, 'must be a whole number of seconds from 1 to 3600').default(30),
+  CHARACTERISATION_MAX_ATTEMPTS: wholeNumber(1, 10, 'must be a whole number from 1 to 10').default(3),
+  SIMULATION_THREADS: wholeNumber(1, 256, 'must be a whole number of simulation threads from 1 to 256').optional(),
+  TABLE_CACHE_MB: wholeNumber(16, 65_536, 'must be a whole number of MB from 16 to 65536').default(512),
+  DEMO_CHARACTERISATION: flag().optional(),
 });
 export type Env = z.infer<typeof envSchema>;

@@ -32,6 +32,17 @@ export function loadConfig(source: EnvSource = process.env): AppConfig {
     clientDist: fromRepoRoot(env.CLIENT_DIST),
     corsOrigins: (env.CORS_ORIGINS ?? '').split(',').map((o) => o.trim()).filter(Boolean),
     trustProxyHops: env.TRUST_PROXY,
+    characterisation: {
+      concurrency: env.CHARACTERISATION_CONCURRENCY,
+      engine: env.CHARACTERISATION_ENGINE,
+      maxPoints: env.CHARACTERISATION_MAX_POINTS,
+      leaseSeconds: env.CHARACTERISATION_LEASE_SECONDS,
+      maxAttempts: env.CHARACTERISATION_MAX_ATTEMPTS,
+      threads: env.SIMULATION_THREADS,
+      tableCacheBytes: env.TABLE_CACHE_MB * 1024 * 1024,
+      // Tests start many servers: none characterises the demo unless it asks.
+      demo: seedDemo && (env.DEMO_CHARACTERISATION ?? env.NODE_ENV !== 'test'),
+    },
   };
 }
 

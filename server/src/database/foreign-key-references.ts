@@ -8,7 +8,8 @@ export interface TableReferences {
 
 /**
  * Every row of another table that refers, through a foreign key, to rows of `target` (`target.column`
- * holding one of `ids`, or to a `via` table whose `viaColumn` holds one of them). Found through the
+ * holding one of `ids`, or to a `via` table whose `viaColumn` holds one of them), except through keys that delete
+ * the row with its target (ON DELETE CASCADE). Found through the
  * foreign keys themselves, so a module asking "is my row still in use?" needs to know no other module's
  * tables. SQLite only (sqlite_master, PRAGMA foreign_key_list); PostgreSQL would read information_schema.
  */
@@ -21,9 +22,11 @@ export async function findReferences(
   const references: TableReferences[] = [];
   for (const { name } of tables) {
     if (ignoreTables.has(name)) continue;
-    const keys: Array<{ table: string; from: string; to: string | null }> = await manager.query(`PRAGMA foreign_key_list(${quote(name)})`);
+    const keys: Array<{ table: string; from: string; to: string | null; on_delete: string }> = await manager.query(`PRAGMA foreign_key_list(${quote(name)})`);
     let count = 0;
     for (const key of keys) {
+      // A row deleted with its target (ON DELETE CASCADE: a characterisation of a version) does not keep it in use.
+      if (key.on_delete.toUpperCase() === 'CASCADE') continue;
       const target = targets.find((candidate) => candidate.table === key.table);
       if (!target) continue;
       const [row] = await manager.query(

@@ -1,4 +1,5 @@
 import { parameterInfo, type ParameterChange, type Process } from '@channelwright/shared/schemas';
+import type { StoredCard } from './model-card/stored-card.js';
 
 type Leaf = number | string | boolean;
 type Group = ParameterChange['group'];
@@ -10,8 +11,23 @@ type Group = ParameterChange['group'];
  * newer definition's order; removed values come last.
  */
 export function diffProcesses(from: Process, to: Process): ParameterChange[] {
-  const before = flatten(from);
-  const after = flatten(to);
+  return diffLeaves(flatten(from), flatten(to));
+}
+
+/** What changed from one version to another: the definitions, and the model cards (hash and mapping, under "modelCard."). */
+export function diffVersions(from: { definition: Process; card: StoredCard | null }, to: { definition: Process; card: StoredCard | null }): ParameterChange[] {
+  return [...diffProcesses(from.definition, to.definition), ...diffLeaves(flatten(cardFacts(from.card)), flatten(cardFacts(to.card)))];
+}
+
+/** A card as the diff compares it: its hash, each corner's section, each model's device ("nmos", "nmos native"). */
+function cardFacts(card: StoredCard | null): { modelCard?: Record<string, unknown> } {
+  if (card === null) return {};
+  const corners = Object.fromEntries(Object.entries(card.mapping.corners).map(([corner, section]) => [corner, section ?? '(outside any section)']));
+  const devices = Object.fromEntries(card.mapping.devices.map((d) => [d.model, d.flavour === undefined ? d.polarity : `${d.polarity} ${d.flavour}`]));
+  return { modelCard: { sha256: card.sha256, corners, devices } };
+}
+
+function diffLeaves(before: Map<string, Leaf>, after: Map<string, Leaf>): ParameterChange[] {
   const changes: ParameterChange[] = [];
   for (const [path, value] of after) {
     const old = before.get(path);
@@ -28,11 +44,12 @@ function change(path: string, kind: ParameterChange['kind'], from: Leaf | null, 
 
 function groupOf(path: string): Group {
   const head = path.split('.')[0];
-  return head === 'nmos' || head === 'pmos' || head === 'corners' || head === 'flavours' ? head : 'process';
+  return head === 'nmos' || head === 'pmos' || head === 'corners' || head === 'flavours' || head === 'modelCard' ? head : 'process';
 }
 
 /** SI unit of the value at a path, from the parameter table; '' for text and plain numbers. */
 function unitOf(path: string): string {
+  if (path.startsWith('modelCard.')) return '';
   const info = path.startsWith('tempRange.') ? parameterInfo(path) : parameterInfo(path.split('.').at(-1)!);
   return info?.unit ?? '';
 }

@@ -34,6 +34,18 @@ export class ProcessVersionEntity {
   @Column({ type: 'varchar', length: 500, default: '' })
   message: string;
 
+  /** The version's SPICE model card as Channelwright re-emitted it from the parsed statements (never the uploaded text); null without one. */
+  @Column({ type: 'text', nullable: true })
+  modelCard: string | null;
+
+  /** SHA-256 (hex) of modelCard. */
+  @Column({ type: 'varchar', length: 64, nullable: true })
+  modelCardSha256: string | null;
+
+  /** JSON text of the ModelCardMapping (corners → sections, models → polarity and flavour). */
+  @Column({ type: 'text', nullable: true })
+  modelCardMapping: string | null;
+
   /** An account (the users module's table, read through UsersService). */
   @Column({ type: 'varchar', nullable: true })
   @ForeignKey('users', { name: 'FK_process_versions_author', onDelete: 'SET NULL' })

@@ -5,9 +5,10 @@ import { processVersionAudit } from '../audit/process-audit.js';
 import { AuditService } from '../audit/audit.service.js';
 import { conflict, DomainError, notFound } from '../common/errors/domain-error.js';
 import { UsersService } from '../users/users.service.js';
-import { diffProcesses } from './process-diff.js';
+import { assertMappingFits, parsedStoredCard, type StoredCard } from './model-card/stored-card.js';
+import { diffVersions } from './process-diff.js';
 import { ProcessProfileEntity, processNameKey } from './process-profile.entity.js';
-import { definitionOf } from './process-response.js';
+import { definitionOf, storedCardOf } from './process-response.js';
 import { ProcessVersionEntity } from './process-version.entity.js';
 
 // The writes of the library, on the EntityManager of a transaction the caller opened (the service's
@@ -21,6 +22,8 @@ export interface NewProfile {
   nodeClass: string;
   message: string;
   demoData?: boolean;
+  /** Its model card, ready to store (readModelCard). */
+  card?: StoredCard | null;
 }
 
 export interface NewVersion {
@@ -30,6 +33,8 @@ export interface NewVersion {
   /** Unchanged when absent. */
   nodeClass?: string;
   message: string;
+  /** The new version's model card: undefined keeps the base version's (its mapping checked against the new definition), null removes it. */
+  card?: StoredCard | null;
 }
 
 /** The field a name clash is reported on: "definition.name" for the JSON API, "name" for an imported file. */
@@ -56,7 +61,7 @@ export class ProcessWriter {
         updatedById: author?.id ?? null,
       }),
     );
-    await this.insertVersion(manager, profile.id, 1, input.definition, input.message, author);
+    await this.insertVersion(manager, profile.id, 1, input.definition, input.card ?? null, input.message, author);
     return profile;
   }
 
@@ -77,24 +82,38 @@ export class ProcessWriter {
       throw staleEdit(input.baseVersion, latest, who);
     }
 
-    const definitionChanged = diffProcesses(definitionOf(latest), input.definition).length > 0;
+    const baseCard = storedCardOf(latest);
+    const card = input.card === undefined ? baseCard : input.card;
+    // A kept card must still fit the edited definition (a corner or flavour it maps may be gone).
+    if (input.card === undefined && card !== null) assertMappingFits(parsedStoredCard(card), card.mapping, input.definition);
+    const versionChanged = diffVersions({ definition: definitionOf(latest), card: baseCard }, { definition: input.definition, card }).length > 0;
     const nodeClassChanged = input.nodeClass !== undefined && input.nodeClass !== profile.nodeClass;
-    if (!definitionChanged && !nodeClassChanged) {
+    if (!versionChanged && !nodeClassChanged) {
       throw new DomainError('NO_CHANGES', `Nothing changed: this is version ${latest.number} as it is`, 400, 'definition');
     }
     if (processNameKey(input.definition.name) !== profile.nameKey) await assertNameFree(manager, input.definition.name, profile.id, nameField);
-    if (definitionChanged) {
+    if (versionChanged) {
       profile.latestVersion += 1;
-      await this.insertVersion(manager, profile.id, profile.latestVersion, input.definition, input.message, author);
+      await this.insertVersion(manager, profile.id, profile.latestVersion, input.definition, card, input.message, author);
     }
     Object.assign(profile, namesOf(input.definition), { nodeClass: input.nodeClass ?? profile.nodeClass, updatedById: author?.id ?? null });
     return profiles.save(profile);
   }
 
-  private async insertVersion(manager: EntityManager, profileId: string, number: number, definition: Process, message: string, author: Author): Promise<void> {
+  private async insertVersion(manager: EntityManager, profileId: string, number: number, definition: Process, card: StoredCard | null, message: string, author: Author): Promise<void> {
     const versions = manager.getRepository(ProcessVersionEntity);
     await versions.insert(
-      versions.create({ profileId, number, schemaVersion: PROCESS_FILE_SCHEMA_VERSION, definition: JSON.stringify(definition), message, authorId: author?.id ?? null }),
+      versions.create({
+        profileId,
+        number,
+        schemaVersion: PROCESS_FILE_SCHEMA_VERSION,
+        definition: JSON.stringify(definition),
+        modelCard: card?.text ?? null,
+        modelCardSha256: card?.sha256 ?? null,
+        modelCardMapping: card === null ? null : JSON.stringify(card.mapping),
+        message,
+        authorId: author?.id ?? null,
+      }),
     );
     await this.audit.record(manager, processVersionAudit(profileId, number, definition.name, message, author));
   }

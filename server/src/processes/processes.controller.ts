@@ -9,6 +9,7 @@ import {
   processProfileSummarySchema,
   processVersionQuerySchema,
   processVersionSummarySchema,
+  storedModelCardSchema,
   updateProcessRequestSchema,
   type CreateProcessRequest,
   type DeprecateProcessRequest,
@@ -20,6 +21,7 @@ import {
   type ProcessProfileSummary,
   type ProcessVersionQuery,
   type ProcessVersionSummary,
+  type StoredModelCard,
   type UpdateProcessRequest,
 } from '@channelwright/shared/schemas';
 import { Body, Controller, Delete, Get, HttpCode, Param, Post, Put, Query, Res } from '@nestjs/common';
@@ -103,6 +105,12 @@ export class ProcessesController {
     @CurrentUser() user: Account,
   ): Promise<ProcessProfile> {
     return this.processes.setDeprecated(id, request.deprecated, user);
+  }
+
+  @Get(':id/model-card')
+  @ApiZodResponse(200, storedModelCardSchema, 'The model card of one version (?version=, else the latest) as Channelwright re-emitted it, with its mapping; 404 PROCESS_HAS_NO_MODEL_CARD without one')
+  modelCard(@Param('id') id: string, @Query(new ZodValidationPipe(processVersionQuerySchema)) query: ProcessVersionQuery, @CurrentUser() user: Account): Promise<StoredModelCard> {
+    return this.processes.modelCard(id, user, query.version);
   }
 
   @Get(':id/export')

@@ -1,12 +1,16 @@
 import type {
   CreateProcessRequest,
   ListProcessesQuery,
+  ModelCardCheck,
+  ModelCardCheckFields,
+  ModelCardMapping,
   Process,
   ProcessDiff,
   ProcessFile,
   ProcessProfile,
   ProcessProfileSummary,
   ProcessVersionSummary,
+  StoredModelCard,
   UpdateProcessRequest,
 } from '@channelwright/shared/schemas';
 import { PROCESS_FILE_FORMAT, PROCESS_FILE_SCHEMA_VERSION } from '@channelwright/shared/schemas';
@@ -18,9 +22,10 @@ import { findReferences } from '../database/foreign-key-references.js';
 import { UnitOfWork } from '../database/unit-of-work.js';
 import { UsersService } from '../users/users.service.js';
 import type { ImportedProcess } from './import/read-process-file.js';
-import { diffProcesses } from './process-diff.js';
+import { cardSummary, checkUploadedCard, readModelCard, type StoredCard } from './model-card/stored-card.js';
+import { diffVersions } from './process-diff.js';
 import { ProcessProfileEntity, processNameKey } from './process-profile.entity.js';
-import { definitionOf, toProfile, toProfileSummary, toVersionSummary } from './process-response.js';
+import { definitionOf, storedCardOf, toProfile, toProfileSummary, toVersionSummary } from './process-response.js';
 import { ProcessVersionEntity } from './process-version.entity.js';
 import { ProcessVisibility, type ProcessViewer } from './process-visibility.js';
 import { ProcessWriter } from './process-writes.js';
@@ -37,6 +42,8 @@ export interface ResolvedProcess {
   /** The id of the ProcessVersionEntity row (what a sheet's foreign key holds). */
   versionId: string;
   definition: Process;
+  /** The version's model card (re-emitted text, hash, mapping); null when it has none. */
+  card: StoredCard | null;
 }
 
 /** A process version as other modules show it: its number, and its profile's newest. */
@@ -53,6 +60,7 @@ export interface ImportTarget {
   message?: string;
   profileId?: string;
   baseVersion?: number;
+  mapping?: ModelCardMapping;
 }
 
 /** An account that saves (the callers check maintainers). */
@@ -111,30 +119,50 @@ export class ProcessesService {
     const fromNumber = from ?? Math.max(1, toNumber - 1);
     const manager = this.unitOfWork.manager;
     const [older, newer] = [await this.version(manager, profile.id, fromNumber, 'from'), await this.version(manager, profile.id, toNumber, 'to')];
-    return { profileId: profile.id, from: fromNumber, to: toNumber, changes: diffProcesses(definitionOf(older), definitionOf(newer)) };
+    const changes = diffVersions({ definition: definitionOf(older), card: storedCardOf(older) }, { definition: definitionOf(newer), card: storedCardOf(newer) });
+    return { profileId: profile.id, from: fromNumber, to: toNumber, changes };
   }
 
   async create(request: CreateProcessRequest, author: Author): Promise<ProcessProfile> {
-    const profile = await this.unitOfWork.run((manager) => this.writer.insertProfile(manager, request, author, 'definition.name'));
+    const card = request.modelCard ? readModelCard(request.modelCard.text, request.modelCard.mapping, request.definition) : null;
+    const profile = await this.unitOfWork.run((manager) => this.writer.insertProfile(manager, { ...request, card }, author, 'definition.name'));
     return this.present(profile);
   }
 
   /** A new version from the edit of `baseVersion`; 409 STALE_EDIT (nothing written) when someone saved after it. */
   async update(id: string, request: UpdateProcessRequest, author: Author): Promise<ProcessProfile> {
-    const profile = await this.unitOfWork.run((manager) => this.writer.appendVersion(manager, id, request, author, 'definition.name'));
+    const { modelCard, ...edit } = request;
+    const card = modelCard ? readModelCard(modelCard.text, modelCard.mapping, request.definition) : modelCard;
+    const profile = await this.unitOfWork.run((manager) => this.writer.appendVersion(manager, id, { ...edit, card }, author, 'definition.name'));
     return this.present(profile);
   }
 
-  /** Stores an imported file as a new profile, or as a new version of `target.profileId` edited from `target.baseVersion`. */
-  async import(file: ImportedProcess, target: ImportTarget, author: Author): Promise<ProcessProfile> {
-    const nodeClass = target.nodeClass ?? file.nodeClass;
-    const message = target.message ?? 'Imported from a file';
-    const profile = await this.unitOfWork.run((manager) =>
-      target.profileId !== undefined && target.baseVersion !== undefined
-        ? this.writer.appendVersion(manager, target.profileId, { baseVersion: target.baseVersion, definition: file.definition, nodeClass, message }, author, 'name')
-        : this.writer.insertProfile(manager, { definition: file.definition, nodeClass: nodeClass ?? '', message }, author, 'name'),
-    );
+  /**
+   * Stores an upload as a new profile, or as a new version of `target.profileId` edited from `target.baseVersion`: a
+   * process file (with the card it carries, or `card`), or a model card alone, which becomes a new version of the base
+   * version's process with that card (a card needs a profile to belong to: 400 naming profileId without one).
+   */
+  async import(file: ImportedProcess | null, cardText: string | null, target: ImportTarget, author: Author): Promise<ProcessProfile> {
+    const message = target.message ?? (file ? 'Imported from a file' : 'Model card uploaded');
+    const profile = await this.unitOfWork.run(async (manager) => {
+      if (target.profileId === undefined || target.baseVersion === undefined) {
+        if (!file) throw new DomainError('VALIDATION_FAILED', 'A model card alone becomes a new version of a profile: give profileId and baseVersion (or upload a process file with it)', 400, 'profileId');
+        const card = this.uploadedCard(cardText ?? file.modelCard?.text ?? null, target.mapping ?? file.modelCard?.mapping, file.definition);
+        return this.writer.insertProfile(manager, { definition: file.definition, nodeClass: target.nodeClass ?? file.nodeClass ?? '', message, card }, author, 'name');
+      }
+      const base = await this.resolveDefinition(target.profileId, target.baseVersion, manager);
+      const definition = file?.definition ?? base.definition;
+      const text = cardText ?? file?.modelCard?.text ?? null;
+      // A new mapping alone re-maps the base version's card.
+      const card = text === null && target.mapping !== undefined && base.card ? this.uploadedCard(base.card.text, target.mapping, definition) : this.uploadedCard(text, target.mapping ?? file?.modelCard?.mapping, definition);
+      const nodeClass = target.nodeClass ?? file?.nodeClass;
+      return this.writer.appendVersion(manager, target.profileId, { baseVersion: target.baseVersion, definition, nodeClass, message, ...(card === null ? {} : { card }) }, author, 'name');
+    });
     return this.present(profile);
+  }
+
+  private uploadedCard(text: string | null, mapping: ModelCardMapping | undefined, definition: Process): StoredCard | null {
+    return text === null ? null : readModelCard(text, mapping, definition);
   }
 
   async setDeprecated(id: string, deprecated: boolean, author: Author): Promise<ProcessProfile> {
@@ -180,6 +208,7 @@ export class ProcessesService {
   /** One version as our exchange file. */
   async exportFile(id: string, viewer: ProcessViewer, version?: number): Promise<{ fileName: string; file: ProcessFile }> {
     const profile = await this.get(id, viewer, version);
+    const card = storedCardOf(await this.version(this.unitOfWork.manager, profile.id, profile.version.number, 'version'));
     const file: ProcessFile = {
       format: PROCESS_FILE_FORMAT,
       schemaVersion: PROCESS_FILE_SCHEMA_VERSION,
@@ -187,9 +216,26 @@ export class ProcessesService {
       exportedAt: new Date().toISOString(),
       source: { profileId: profile.id, version: profile.version.number },
       process: profile.version.definition,
+      ...(card === null ? {} : { modelCard: { text: card.text, mapping: card.mapping } }),
     };
     const base = profile.name.replace(/[^A-Za-z0-9._-]+/g, '_');
     return { fileName: `${base}-v${profile.version.number}.process.json`, file };
+  }
+
+  /** An uploaded card checked against a version's corners and flavours, nothing stored. */
+  async checkModelCard(text: string, fields: ModelCardCheckFields, viewer: ProcessViewer): Promise<ModelCardCheck> {
+    const profile = await this.visibleProfile(fields.profileId, viewer);
+    const row = await this.version(this.unitOfWork.manager, profile.id, fields.version ?? profile.latestVersion, 'version');
+    return checkUploadedCard(text, fields.mapping, definitionOf(row));
+  }
+
+  /** A version's model card with its re-emitted text; 404 PROCESS_HAS_NO_MODEL_CARD when it has none. */
+  async modelCard(id: string, viewer: ProcessViewer, version?: number): Promise<StoredModelCard> {
+    const profile = await this.visibleProfile(id, viewer);
+    const row = await this.version(this.unitOfWork.manager, profile.id, version ?? profile.latestVersion, 'version');
+    const card = storedCardOf(row);
+    if (!card) throw notFound('PROCESS_HAS_NO_MODEL_CARD', `${profile.name} version ${row.number} has no model card`);
+    return { ...cardSummary(card), text: card.text };
   }
 
   /**
@@ -263,5 +309,5 @@ function profileNotFound(): DomainError {
 }
 
 function resolved(profile: ProcessProfileEntity, row: ProcessVersionEntity): ResolvedProcess {
-  return { profileId: profile.id, name: profile.name, deprecated: profile.deprecated, version: row.number, versionId: row.id, definition: definitionOf(row) };
+  return { profileId: profile.id, name: profile.name, deprecated: profile.deprecated, version: row.number, versionId: row.id, definition: definitionOf(row), card: storedCardOf(row) };
 }

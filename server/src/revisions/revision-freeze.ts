@@ -16,9 +16,9 @@ import { RevisionEntity } from './revision.entity.js';
 export async function freezeSheet(manager: EntityManager, loaded: LoadedSheet, message: string, authorId: string): Promise<RevisionEntity> {
   const { sheet, process, devices } = loaded;
   if (devices.length === 0) throw conflict('SHEET_HAS_NO_DEVICES', 'The sheet has no devices to freeze');
-  const stale = devices.filter((device) => staleReasonsOf(device, sheet).length > 0);
+  const stale = devices.filter((device) => staleReasonsOf(device, sheet, loaded.tableHashes).length > 0);
   if (stale.length > 0) {
-    throw conflict('SHEET_RESULTS_STALE', `Recompute the sheet first: the results of ${stale.map((d) => d.name).join(', ')} were made on another process or engine version`);
+    throw conflict('SHEET_RESULTS_STALE', `Recompute the sheet first: the results of ${stale.map((d) => d.name).join(', ')} were made on another process or engine version, or from another table`);
   }
   const revisions = manager.getRepository(RevisionEntity);
   const last = (await revisions.maximum('number', { sheetId: sheet.id })) ?? 0;

@@ -1,4 +1,4 @@
-import { computeSize, ENGINE_VERSION, isEngineError } from '@channelwright/shared/device';
+import { computeSize, ENGINE_VERSION, isEngineError, type TableSource } from '@channelwright/shared/device';
 import { isErrorCode, type DeviceComputeError, type DeviceResult, type DeviceTargets, type ErrorCode } from '@channelwright/shared/schemas';
 import { DomainError } from '../common/errors/domain-error.js';
 import type { ResolvedProcess } from '../processes/processes.service.js';
@@ -22,11 +22,11 @@ export interface DeviceComputation {
  */
 const BAD_REFERENCE_CODES = new Set<ErrorCode>(['VALIDATION_FAILED', 'UNKNOWN_CORNER', 'UNKNOWN_FLAVOUR', 'FLAVOUR_POLARITY_MISMATCH']);
 
-/** Sizes a device with the engine on the sheet's process version (defaults from the sheet). */
-export function computeDevice(targets: DeviceTargets, sheet: Pick<SheetEntity, 'temperature' | 'corner' | 'model'>, process: ResolvedProcess): DeviceComputation {
+/** Sizes a device with the engine on the sheet's process version (defaults from the sheet); `tables` for the table model. */
+export function computeDevice(targets: DeviceTargets, sheet: Pick<SheetEntity, 'temperature' | 'corner' | 'model'>, process: ResolvedProcess, tables?: TableSource): DeviceComputation {
   const made = { engineVersion: ENGINE_VERSION, processVersionId: process.versionId, computedAt: new Date() };
   try {
-    const response = computeSize(sizeRequestOf(targets, sheet, process), process.definition);
+    const response = computeSize(sizeRequestOf(targets, sheet, process), process.definition, tables);
     return { ...made, result: { ...response, processVersionId: process.versionId, processVersion: process.version }, error: null };
   } catch (error) {
     if (!isEngineError(error)) throw error;

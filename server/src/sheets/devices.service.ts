@@ -10,6 +10,7 @@ import { assertKnownToProcess, computationColumns, computeDevice } from './devic
 import { mergeTargets } from './device-targets.js';
 import { DeviceEntity } from './device.entity.js';
 import { SheetReader } from './sheet-reader.js';
+import { SheetTables } from './sheet-tables.js';
 import { SheetEntity } from './sheet.entity.js';
 import { targetsOf, toDevice, type LoadedSheet } from './sheet-response.js';
 
@@ -25,6 +26,7 @@ export class DevicesService {
     private readonly unitOfWork: UnitOfWork,
     private readonly reader: SheetReader,
     private readonly audit: AuditService,
+    private readonly tables: SheetTables,
   ) {}
 
   async list(sheetId: string): Promise<Device[]> {
@@ -37,7 +39,7 @@ export class DevicesService {
     return this.unitOfWork.run(async (manager) => {
       const loaded = await this.reader.load(sheetId, manager);
       assertNameFree(loaded, targets.name);
-      const computation = computeDevice(targets, loaded.sheet, loaded.process);
+      const computation = computeDevice(targets, loaded.sheet, loaded.process, await this.tables.sourceFor(loaded.sheet, [targets], manager));
       assertKnownToProcess(computation);
       const position = Math.max(-1, ...loaded.devices.map((d) => d.position)) + 1;
       const repository = manager.getRepository(DeviceEntity);
@@ -57,7 +59,7 @@ export class DevicesService {
       const before = targetsOf(device);
       const targets = mergeTargets(before, change);
       if (targets.name !== device.name) assertNameFree(loaded, targets.name);
-      const computation = computeDevice(targets, loaded.sheet, loaded.process);
+      const computation = computeDevice(targets, loaded.sheet, loaded.process, await this.tables.sourceFor(loaded.sheet, [targets], manager));
       assertKnownToProcess(computation);
       await manager.getRepository(DeviceEntity).save(Object.assign(device, { name: targets.name, targets: JSON.stringify(targets), ...computationColumns(computation), version: device.version + 1 }));
       await this.audit.record(manager, deviceAudit('device.updated', loaded.sheet, device, before, targets));

@@ -5,7 +5,7 @@ import { ApiBearerAuth, ApiBody, ApiConsumes, ApiProduces, ApiTags } from '@nest
 import type { Response } from 'express';
 import { z } from 'zod';
 import { DomainError } from '../common/errors/domain-error.js';
-import { FileTooLargeInterceptor } from '../common/files/file-too-large.interceptor.js';
+import { fileTooLarge, megabytes } from '../common/files/file-too-large.interceptor.js';
 import { ApiZodResponse } from '../common/openapi/api-zod.decorators.js';
 import { ZodValidationPipe } from '../common/validation/zod-validation.pipe.js';
 import { ProjectAccess } from '../projects/project-access.guard.js';
@@ -36,7 +36,7 @@ export class SheetFilesController {
   @Post('import')
   @HttpCode(200)
   @ProjectAccess('edit', 'sheet')
-  @UseInterceptors(FileTooLargeInterceptor, FileInterceptor('file', { limits: { fileSize: SHEET_IMPORT_MAX_BYTES, files: 1, fields: 5 } }))
+  @UseInterceptors(fileTooLarge(megabytes(SHEET_IMPORT_MAX_BYTES)), FileInterceptor('file', { limits: { fileSize: SHEET_IMPORT_MAX_BYTES, files: 1, fields: 5 } }))
   @ApiConsumes('multipart/form-data')
   @ApiBody({
     schema: {

@@ -5,6 +5,7 @@ import { notFound, type DomainError } from '../common/errors/domain-error.js';
 import { ProcessesService, type ResolvedProcess } from '../processes/processes.service.js';
 import { DeviceEntity } from './device.entity.js';
 import type { LoadedSheet } from './sheet-response.js';
+import { SheetTables } from './sheet-tables.js';
 import { SheetEntity } from './sheet.entity.js';
 
 export const sheetNotFound = (): DomainError => notFound('SHEET_NOT_FOUND', 'There is no sheet with this id');
@@ -15,6 +16,7 @@ export class SheetReader {
   constructor(
     @InjectRepository(SheetEntity) private readonly sheets: Repository<SheetEntity>,
     private readonly processes: ProcessesService,
+    private readonly tables: SheetTables,
   ) {}
 
   async load(sheetId: string, manager: EntityManager = this.sheets.manager): Promise<LoadedSheet> {
@@ -42,6 +44,8 @@ export class SheetReader {
     for (const versionId of new Set(sheets.map((s) => s.processVersionId))) processes.set(versionId, await this.processes.resolveVersion(versionId, manager));
     const facts = await this.processes.versionFacts([...devices.map((d) => d.processVersionId), ...processes.keys()], manager);
     const versionNumbers = new Map([...facts].map(([id, fact]) => [id, { number: fact.number, name: fact.profileName }]));
+    const tableHashes = new Map<string, Map<string, string>>();
+    for (const versionId of processes.keys()) tableHashes.set(versionId, await this.tables.currentHashes(versionId, manager));
     return sheets.map((sheet) => {
       const process = processes.get(sheet.processVersionId)!;
       return {
@@ -50,6 +54,7 @@ export class SheetReader {
         latestVersion: facts.get(sheet.processVersionId)?.latestVersion ?? process.version,
         devices: devices.filter((device) => device.sheetId === sheet.id),
         versionNumbers,
+        tableHashes: tableHashes.get(sheet.processVersionId) ?? new Map(),
       };
     });
   }

@@ -16,6 +16,7 @@ import { assertSheetCorner, chosenProcess } from './sheet-process-choice.js';
 import { sheetNotFound, SheetReader } from './sheet-reader.js';
 import { targetsOf, toSheet, toSheetSummary } from './sheet-response.js';
 import { SHEET_REMOVAL_CHECKS, type SheetRemovalCheck } from './sheet-removal-check.js';
+import { SheetTables } from './sheet-tables.js';
 import { SheetUsage } from './sheet-usage.js';
 import { SheetEntity } from './sheet.entity.js';
 
@@ -30,6 +31,7 @@ export class SheetsService {
     private readonly usage: SheetUsage,
     private readonly audit: AuditService,
     private readonly moduleRef: ModuleRef,
+    private readonly tables: SheetTables,
   ) {}
 
   async list(projectId: string): Promise<SheetSummary[]> {
@@ -97,8 +99,9 @@ export class SheetsService {
     await this.unitOfWork.run(async (manager) => {
       const loaded = await this.reader.load(sheetId, manager);
       const devices = manager.getRepository(DeviceEntity);
+      const tables = await this.tables.sourceFor(loaded.sheet, loaded.devices.map(targetsOf), manager);
       for (const device of loaded.devices) {
-        const computation = computeDevice(targetsOf(device), loaded.sheet, loaded.process);
+        const computation = computeDevice(targetsOf(device), loaded.sheet, loaded.process, tables);
         await devices.save(Object.assign(device, computationColumns(computation), { version: device.version + 1 }));
       }
       await this.audit.record(manager, sheetAudit('sheet.recomputed', loaded.sheet, undefined, { devices: loaded.devices.length, processVersionId: loaded.process.versionId }));

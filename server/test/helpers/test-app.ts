@@ -12,8 +12,10 @@ import { createTestEnv } from './test-env.js';
 export interface TestAppOptions {
   /** Seed the invented demo data (default true). */
   seed?: boolean;
-  /** More environment variables (SIGNUP_ENABLED, JWT_TTL, …); DATA_DIR is always a fresh temporary folder. */
+  /** More environment variables (SIGNUP_ENABLED, JWT_TTL, …); DATA_DIR is a fresh temporary folder unless `dataDir`. */
   env?: EnvSource;
+  /** Run on this DATA_DIR (another app's, to restart a server on its data); it is left in place on close. */
+  dataDir?: string;
 }
 
 export interface TestApp {
@@ -27,12 +29,13 @@ export interface TestApp {
   loginAs(email: string, password?: string): Promise<string>;
   /** Registers an account (following the confirmation link mailed to it, as its owner would) and returns its token and user. */
   register(account: RegisterRequest): Promise<AuthResponse>;
-  close(): Promise<void>;
+  /** Stops the app and deletes its DATA_DIR (unless `keepData`: another app is started on it next). */
+  close(options?: { keepData?: boolean }): Promise<void>;
 }
 
 /** The real app (real migrations, real SQLite file) on a temporary DATA_DIR of its own. */
 export async function createTestApp(options: TestAppOptions = {}): Promise<TestApp> {
-  const testEnv = createTestEnv({ SEED_DEMO: String(options.seed ?? true), ...options.env });
+  const testEnv = createTestEnv({ SEED_DEMO: String(options.seed ?? true), ...options.env }, options.dataDir);
   let app: NestExpressApplication;
   try {
     app = await createApp({ env: testEnv.env, logger: ['error'] });
@@ -67,9 +70,9 @@ export async function createTestApp(options: TestAppOptions = {}): Promise<TestA
       if (confirmed.status !== 200) throw new Error(`confirm(${account.email}) answered ${confirmed.status}: ${JSON.stringify(confirmed.body)}`);
       return confirmed.body as AuthResponse;
     },
-    async close() {
+    async close(closing = {}) {
       await app.close();
-      testEnv.remove();
+      if (!closing.keepData) testEnv.remove();
     },
   };
 }

@@ -12,9 +12,9 @@ export interface TestEnv {
   remove(): void;
 }
 
-/** An environment of its own for one test app: a fresh temporary DATA_DIR, a test secret, no client build. */
-export function createTestEnv(overrides: EnvSource = {}): TestEnv {
-  const dataDir = mkdtempSync(join(tmpdir(), 'channelwright-test-'));
+/** An environment of its own for one test app: a fresh temporary DATA_DIR (or the one given, kept on remove), a test secret, no client build. */
+export function createTestEnv(overrides: EnvSource = {}, existingDataDir?: string): TestEnv {
+  const dataDir = existingDataDir ?? mkdtempSync(join(tmpdir(), 'channelwright-test-'));
   return {
     dataDir,
     env: {
@@ -25,6 +25,8 @@ export function createTestEnv(overrides: EnvSource = {}): TestEnv {
       CLIENT_DIST: join(dataDir, 'no-client-build'),
       ...overrides,
     },
-    remove: () => rmSync(dataDir, { recursive: true, force: true }),
+    remove: () => {
+      if (existingDataDir === undefined) rmSync(dataDir, { recursive: true, force: true });
+    },
   };
 }

@@ -1,15 +1,22 @@
 import { type CornersRequestInput, type CornersResponse, cornersRequestSchema } from '../schemas/corners.js';
 import { fieldOfIssue } from '../schemas/field-of-issue.js';
-import { type SizeRequestInput, type SizeResponse, sizeRequestSchema } from '../schemas/size.js';
-import { type SweepPoint, type SweepRequestInput, type SweepResponse, sweepRequestSchema } from '../schemas/sweep.js';
+import { type SizeRequest, type SizeRequestInput, type SizeResponse, sizeRequestSchema } from '../schemas/size.js';
+import { type SweepPoint, type SweepRequest, type SweepRequestInput, type SweepResponse, sweepRequestSchema } from '../schemas/sweep.js';
 import { type Polarity, type Process, processSchema } from '../schemas/process.js';
+import type { Model } from '../schemas/request-fields.js';
+import { compareResults } from './compare-results.js';
+import { cornersWithTable } from './table-corners.js';
+import { sizeWithTable } from './table-size.js';
+import { TABLE_ACCURACY, type TableSource, tableOf } from './table-source.js';
+import { sweepWithTable } from './table-sweep.js';
 import { checkRequestAgainstProcess } from './check-request.js';
 import { cornerAnalysis } from './corners.js';
 import type { CurrentModel } from './drain-current.js';
 import { ENGINE_VERSION } from './engine-version.js';
 import { EngineError, isEngineError } from './errors.js';
 import { parseOrThrow } from './parse-request.js';
-import { prepareDevice } from './resolve-device.js';
+import { modelAccuracyOf } from './model-accuracy.js';
+import { deviceParamsOf, prepareDevice } from './resolve-device.js';
 import { regionOf } from './small-signal.js';
 import { type Sizing, solveSize } from './solve.js';
 import { type SweepColumns, sweep } from './sweep.js';
@@ -20,6 +27,7 @@ import { zeroTemperatureCoefficientVgs } from './zero-temperature-coefficient.js
  * (EngineError VALIDATION_FAILED with the field), takes the process given (a stored profile the server
  * resolved from processId) or else the request's inline process, checks the request against it, and
  * answers the response shape of schemas/compute.ts. Errors are EngineErrors with a code and a field.
+ * Model "table" interpolates in the tables of the stored process version, which the caller finds (`tables`).
  */
 
 function resolveProcess(inline: Process | undefined, given: Process | undefined): Process {
@@ -35,46 +43,55 @@ function resolveProcess(inline: Process | undefined, given: Process | undefined)
   return inline;
 }
 
-function context(polarity: Polarity, flavour: string | undefined, model: CurrentModel) {
-  return { engineVersion: ENGINE_VERSION, polarity, ...(flavour === undefined ? {} : { flavour }), model };
+function context(process: Process, polarity: Polarity, flavour: string | undefined, model: Model) {
+  const accuracy = model === 'table' ? TABLE_ACCURACY : modelAccuracyOf(model, deviceParamsOf(process, polarity, flavour));
+  return { engineVersion: ENGINE_VERSION, polarity, ...(flavour === undefined ? {} : { flavour }), model, accuracy };
 }
 
 function sizeResponse(process: Process, sizing: Sizing, polarity: Polarity, flavour: string | undefined, model: CurrentModel, corner: string, temperature: number): SizeResponse {
-  return { ...sizing, ...context(polarity, flavour, model), corner, temperature, ztcVgs: ztcVgsOf(process, sizing, polarity, flavour, model, corner, temperature) };
+  return { ...sizing, ...context(process, polarity, flavour, model), corner, temperature, ztcVgs: ztcVgsOf(process, sizing, polarity, flavour, model, corner, temperature) };
 }
 
 function ztcVgsOf(process: Process, sizing: Sizing, polarity: Polarity, flavour: string | undefined, model: CurrentModel, corner: string, temperature: number): number | null {
   try {
-    return zeroTemperatureCoefficientVgs(process, { polarity, flavour, corner, model, w: sizing.w, l: sizing.l, vds: sizing.vds, vsb: sizing.vsb }, temperature).vgs;
+    return zeroTemperatureCoefficientVgs(process, { polarity, flavour, corner, model, w: sizing.w, l: sizing.l, fingers: sizing.fingers, vds: sizing.vds, vsb: sizing.vsb }, temperature).vgs;
   } catch (error) {
     if (isEngineError(error)) return null;
     throw error;
   }
 }
 
-/** POST /api/compute/size. */
-export function computeSize(request: SizeRequestInput, process?: Process): SizeResponse {
+/** POST /api/compute/size; with `compare`, the same targets sized with the other model beside it. */
+export function computeSize(request: SizeRequestInput, process?: Process, tables?: TableSource): SizeResponse {
   const parsed = parseOrThrow(sizeRequestSchema, request);
   const resolved = resolveProcess(parsed.process, process);
   checkRequestAgainstProcess(parsed, resolved);
+  const result = sizeWith(parsed, parsed.model, resolved, tables);
+  const other = parsed.compare;
+  return other === undefined ? result : { ...result, comparison: compareResults(result, other, () => sizeWith(parsed, other, resolved, tables)) };
+}
+
+function sizeWith(parsed: SizeRequest, model: Model, resolved: Process, tables: TableSource | undefined): SizeResponse {
+  if (model === 'table') return sizeWithTable(parsed, resolved, tableOf(tables, parsed.polarity, parsed.flavour));
   const device = prepareDevice(resolved, parsed.polarity, { corner: parsed.corner, temperature: parsed.temperature, flavour: parsed.flavour });
-  return sizeResponse(resolved, solveSize(device, parsed.model, parsed), parsed.polarity, parsed.flavour, parsed.model, device.corner, device.temperature);
+  return sizeResponse(resolved, solveSize(device, model, parsed), parsed.polarity, parsed.flavour, model, device.corner, device.temperature);
 }
 
 /** The parsed request, its process and the columnar sweep with its chosen point: one run of the engine. */
-function runSweep(request: SweepRequestInput, process?: Process) {
-  const parsed = parseOrThrow(sweepRequestSchema, request);
-  const resolved = resolveProcess(parsed.process, process);
-  checkRequestAgainstProcess(parsed, resolved);
+function runSweep(parsed: SweepRequest & { model: CurrentModel }, resolved: Process) {
   const result = sweep(parsed, resolved);
   const base = sizeResponse(resolved, result.base, parsed.polarity, parsed.flavour, parsed.model, parsed.corner, parsed.temperature ?? resolved.tnom);
-  const head = { ...context(parsed.polarity, parsed.flavour, parsed.model), param: result.param, hold: result.hold, fields: [...result.fields], base };
+  const head = { ...context(resolved, parsed.polarity, parsed.flavour, parsed.model), param: result.param, hold: result.hold, fields: [...result.fields], base };
   return { result, head };
 }
 
 /** POST /api/compute/sweep: the columnar sweep turned into points, NaN and infinities as null. */
-export function computeSweep(request: SweepRequestInput, process?: Process): SweepResponse {
-  const { result, head } = runSweep(request, process);
+export function computeSweep(request: SweepRequestInput, process?: Process, tables?: TableSource): SweepResponse {
+  const parsed = parseOrThrow(sweepRequestSchema, request);
+  const resolved = resolveProcess(parsed.process, process);
+  checkRequestAgainstProcess(parsed, resolved);
+  if (parsed.model === 'table') return sweepWithTable(parsed, resolved, tableOf(tables, parsed.polarity, parsed.flavour));
+  const { result, head } = runSweep({ ...parsed, model: parsed.model }, resolved);
   return {
     ...head,
     series: result.series.map((series) => ({ corner: series.corner, temperature: series.temperature, points: pointsOf(result, series), warnings: series.warnings })),
@@ -109,10 +126,14 @@ function pointsOf(result: SweepColumns, series: SweepColumns['series'][number]):
 }
 
 /** POST /api/compute/corners. */
-export function computeCorners(request: CornersRequestInput, process?: Process): CornersResponse {
+export function computeCorners(request: CornersRequestInput, process?: Process, tables?: TableSource): CornersResponse {
   const parsed = parseOrThrow(cornersRequestSchema, request);
   const resolved = resolveProcess(parsed.process, process);
   checkRequestAgainstProcess(parsed, resolved);
-  const analysis = cornerAnalysis(parsed, resolved);
-  return { ...context(parsed.polarity, parsed.flavour, parsed.model), bias: parsed.bias, ...analysis };
+  if (parsed.model === 'table') {
+    const choice = tableOf(tables, parsed.polarity, parsed.flavour);
+    return { ...context(resolved, parsed.polarity, parsed.flavour, 'table'), table: choice.ref, bias: parsed.bias, ...cornersWithTable(parsed, resolved, choice) };
+  }
+  const analysis = cornerAnalysis({ ...parsed, model: parsed.model }, resolved);
+  return { ...context(resolved, parsed.polarity, parsed.flavour, parsed.model), bias: parsed.bias, ...analysis };
 }

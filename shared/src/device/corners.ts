@@ -1,13 +1,13 @@
 import { CORNER_FIGURES, type CornerFigure, type CornersRequest, type CornersResponse, WORSE_DIRECTION } from '../schemas/corners.js';
 import type { Warning } from '../schemas/warning.js';
 import { type Process, cornerNames } from '../schemas/process.js';
-import { lambdaAtLength } from './channel-length-modulation.js';
+import { channelOf, slopeFactorOf, thresholdOf } from './channel.js';
+import type { CurrentModel } from './drain-current.js';
 import { EngineError, isEngineError } from './errors.js';
 import { type OperatingPoint, operatingPoint } from './operating-point.js';
 import { overdriveForCurrent } from './overdrive.js';
-import { type PreparedDevice, prepareDevice, thresholdAt } from './resolve-device.js';
+import { type PreparedDevice, prepareDevice } from './resolve-device.js';
 import { say, voltageNames } from './say.js';
-import { slopeFactor } from './slope-factor.js';
 import { checkLength } from './solve.js';
 import { operatingPointWarnings } from './warnings.js';
 
@@ -40,7 +40,7 @@ export function temperaturesOf(request: Pick<CornersRequest, 'temperatures'>, pr
  * highest value of each figure and where, `worst` the worse of the two for figures that have a worse
  * direction (lowest gm, highest ioff …).
  */
-export function cornerAnalysis(request: CornersRequest, process: Process): CornerAnalysis {
+export function cornerAnalysis(request: CornersRequest & { model: CurrentModel }, process: Process): CornerAnalysis {
   const points: CornerPoint[] = [];
   const corners = cornersOf(request, process);
   for (const [index, corner] of corners.entries()) {
@@ -60,23 +60,25 @@ export function cornerAnalysis(request: CornersRequest, process: Process): Corne
   return { points, ...extremesOf(points) };
 }
 
-function biasedOperatingPoint(device: PreparedDevice, request: CornersRequest): OperatingPoint {
+function biasedOperatingPoint(device: PreparedDevice, request: CornersRequest & { model: CurrentModel }): OperatingPoint {
   const { w, l, vds, vsb, model } = request;
+  const fingers = request.fingers ?? 1;
   checkLength(device, l);
-  const vt = thresholdAt(device, vsb);
+  const channel = channelOf(device, model, w, l, fingers);
+  const vt = thresholdOf(device, channel, vsb, vds);
   let vgs = request.vgs as number;
   if (request.bias === 'current') {
     const id = request.id as number;
-    const beta = (device.kp * w) / l;
-    vgs = vt + overdriveForCurrent(model, beta, slopeFactor(device.params, vsb), device.ut, lambdaAtLength(device.params, l), vds, id);
+    vgs = vt + overdriveForCurrent(model, channel.beta, slopeFactorOf(device, channel, vsb), device.ut, channel.lambda, vds, id, channel.terms);
     if (vgs > device.vdd) {
       throw new EngineError('ID_NOT_REACHABLE_BELOW_VDD', `At ${device.corner}, ${say(device.temperature, '°C')}, W = ${say(w, 'm')} would need ${voltageNames(device.polarity).vgs} = ${say(vgs, 'V')} (above VDD = ${say(device.vdd, 'V')}) to carry ${say(id, 'A')}`, 'id');
     }
   }
-  return operatingPoint(device, model, w, l, { vgs, vds, vsb });
+  return operatingPoint(device, model, w, l, { vgs, vds, vsb }, fingers);
 }
 
-function extremesOf(points: readonly CornerPoint[]): Pick<CornersResponse, 'extremes' | 'worst'> {
+/** The lowest and highest value of each figure over the points, and the worse of the two where a figure has a worse direction. */
+export function extremesOf(points: readonly CornerPoint[]): Pick<CornersResponse, 'extremes' | 'worst'> {
   const extremes: CornersResponse['extremes'] = {};
   const worst: CornersResponse['worst'] = {};
   for (const figure of CORNER_FIGURES) {

@@ -3,6 +3,7 @@
  * polarity-normalised voltages (PMOS: VSG, VSD, VBS, vt = −VTP). Equations and sources: docs/model.md.
  */
 export { ENGINE_VERSION } from './engine-version.js';
+export { modelAccuracyOf } from './model-accuracy.js';
 export { EngineError, isEngineError } from './errors.js';
 
 // The three calls of the compute API (parse, check against the process, compute).
@@ -14,6 +15,7 @@ export { parseOrThrow } from './parse-request.js';
 export { type PreparedDevice, prepareDevice, deviceParamsOf, cornerShiftOf, thresholdAt } from './resolve-device.js';
 export { type Bias, type OperatingPoint, operatingPoint } from './operating-point.js';
 export { channelCurrentAt } from './channel-current.js';
+export { normalisedCharge } from './inversion-charge.js';
 
 // Sizing, sweeps, corners.
 export { type SizeTarget, type Sizing, type Constraint, solveSize, MAX_WIDTH } from './solve.js';
@@ -50,6 +52,7 @@ export {
   type SmallSignal,
   smallSignal,
   saturationVoltage,
+  gmbRatioOf,
   inversionCoefficient,
   regionOf,
   WEAK_INVERSION_IC,
@@ -57,13 +60,24 @@ export {
 } from './small-signal.js';
 export {
   type GateCapacitances,
+  type ChargeBias,
+  type JunctionBias,
   oxideCapacitance,
   gateCapacitances,
-  gateSourceCapacitance,
-  gateDrainCapacitance,
   junctionCapacitance,
   transitFrequency,
+  DEFAULT_JUNCTION,
 } from './capacitance.js';
+export { type Channel, channelOf, kpAtLength } from './channel.js';
+export {
+  type ChannelTerms,
+  LONG_CHANNEL,
+  DEFAULT_DIBL_EXPONENT,
+  channelTermsAt,
+  effectiveLength,
+  effectiveWidth,
+  mobilityExponentAt,
+} from './short-channel.js';
 export {
   type MismatchDevice,
   type PairMismatch,
@@ -73,7 +87,7 @@ export {
   matchGroupMismatch,
   pelgromPairSigma,
 } from './mismatch.js';
-export { type Leakage, leakage } from './leakage.js';
+export { type Leakage, type LeakageEstimate, leakage, junctionLeakageFactor, gateInducedDrainLeakage, DEFAULT_GIDL } from './leakage.js';
 export { type ZtcDevice, type ZeroTemperatureCoefficient, zeroTemperatureCoefficientVgs } from './zero-temperature-coefficient.js';
 export { type ScalableDevice, scaleConstantField, dennardRatios } from './scaling.js';
 export {
@@ -114,12 +128,23 @@ export {
   tablePointCount,
   lineOffset,
   vgsOfNode,
+  widthScale,
+  widthForScale,
   checkTableGrid,
   checkLookupTable,
 } from './lookup-table.js';
-export { encodeTable, decodeTable } from './table-codec.js';
+export { encodeTable, encodeTableInSteps, decodeTable } from './table-codec.js';
 export { type DefaultGridInputs, defaultTableGrid } from './default-table-grid.js';
 export { MonotoneCubic, monotoneCubicAt } from './monotone-cubic.js';
-export { type PreparedTable, type TableConditions, TableLine, prepareTable, tableLine } from './table-lookup.js';
+export { type PreparedTable, type TableConditions, TableLine, prepareTable, prepareTableInSteps, tableLine } from './table-lookup.js';
 export { type TableOperatingPoint, operatingPointOnLine, tableOperatingPoint } from './table-operating-point.js';
 export { type TableSizeTarget, type TableSizing, sizeFromTable, vgsForGmId, vgsForOverdrive, vgsForCurrentDensity } from './table-sizing.js';
+
+// The table model in the compute API: dispatch by model, the full operating point of a table result, design charts.
+export { type TableChoice, type TableSource, tableOf } from './table-source.js';
+export { type TableFigures, TABLE_ANALYTIC_FIGURES, tableFigures, tableZtcVgs, gmIdPeakOf } from './table-figures.js';
+export { type TableSizeResponse, sizeWithTable } from './table-size.js';
+export { sweepWithTable } from './table-sweep.js';
+export { cornersWithTable } from './table-corners.js';
+export { type DesignChartConditions, type DesignChartData, designChart } from './design-chart.js';
+export { compareResults, differencesOf } from './compare-results.js';

@@ -44,8 +44,16 @@ export interface TableGrid {
   polarity: 'nmos' | 'pmos';
   /** The model's name in the card (lower case). */
   modelName: string;
-  /** The width every point was simulated at, m; currents, conductances and capacitances scale with W / referenceWidth. */
+  /** The width every point was simulated at, m; currents, conductances and capacitances scale with the effective width (widthScale). */
   referenceWidth: number;
+  /**
+   * The card's width reduction, m: BSIM's effective width is W − 2·wint (BSIM4.8 manual, Weff; the bias- and
+   * geometry-dependent terms of dW left out), so a device of drawn width W has (W − widthOffset)/(referenceWidth −
+   * widthOffset) times the table's current. Absent: 0 (scaling with W itself).
+   */
+  widthOffset?: number;
+  /** The card's length reduction 2·lint, m (Leff = L − lengthOffset), for the effective length a result shows. Absent: 0. */
+  lengthOffset?: number;
   lengths: number[];
   vgs: VgsAxis;
   vds: number[];
@@ -61,6 +69,22 @@ export interface TableGrid {
 export interface LookupTable {
   grid: TableGrid;
   columns: Record<TableField, Float32Array | Float64Array>;
+}
+
+/**
+ * How many times the reference device's current a device of drawn width w (all fingers) carries: each finger loses the
+ * width offset, so (w − fingers·widthOffset)/(referenceWidth − widthOffset).
+ */
+export function widthScale(grid: Pick<TableGrid, 'referenceWidth' | 'widthOffset'>, w: number, fingers = 1): number {
+  const offset = grid.widthOffset ?? 0;
+  if (!(w > fingers * offset)) throw new EngineError('VALIDATION_FAILED', `W must be wider than the card's width reduction ${offset} m per finger`, 'w');
+  return (w - fingers * offset) / (grid.referenceWidth - offset);
+}
+
+/** The drawn width (all fingers) that carries `ratio` times the reference device's current (the inverse of widthScale). */
+export function widthForScale(grid: Pick<TableGrid, 'referenceWidth' | 'widthOffset'>, ratio: number, fingers = 1): number {
+  const offset = grid.widthOffset ?? 0;
+  return fingers * offset + ratio * (grid.referenceWidth - offset);
 }
 
 /** How many points a grid holds. */
@@ -91,6 +115,9 @@ function ascending(values: readonly number[], field: string, positive: boolean):
 export function checkTableGrid(grid: TableGrid): void {
   if (grid.polarity !== 'nmos' && grid.polarity !== 'pmos') throw new EngineError('TABLE_INVALID', 'The table polarity must be nmos or pmos', 'polarity');
   if (!(grid.referenceWidth > 0) || !Number.isFinite(grid.referenceWidth)) throw new EngineError('TABLE_INVALID', 'The reference width must be a positive number', 'referenceWidth');
+  if (grid.widthOffset !== undefined && !(grid.widthOffset >= 0 && grid.widthOffset < grid.referenceWidth / 2)) {
+    throw new EngineError('TABLE_INVALID', 'The width offset must be at least 0 and well below the reference width', 'widthOffset');
+  }
   ascending(grid.lengths, 'lengths', true);
   ascending(grid.vds, 'vds', false);
   ascending(grid.vsb, 'vsb', false);

@@ -1,5 +1,6 @@
 import { type CurrentModel, GM_ID, ID, KERNEL_OUTPUTS, drainCurrentInto } from './drain-current.js';
 import { EngineError } from './errors.js';
+import { type ChannelTerms, LONG_CHANNEL } from './short-channel.js';
 import { say, sayGmId } from './say.js';
 
 /** The weak-inversion limit of gm/ID, 1/(n·UT): no bias gives more (both models). */
@@ -20,7 +21,7 @@ const scratch = new Float64Array(KERNEL_OUTPUTS);
  * Where the square law's tail and its square branch do not meet exactly (VDS of a few UT), it returns
  * the edge of the gap and the caller reports the current reached.
  */
-export function overdriveForCurrent(model: CurrentModel, beta: number, n: number, ut: number, lambda: number, vds: number, id: number): number {
+export function overdriveForCurrent(model: CurrentModel, beta: number, n: number, ut: number, lambda: number, vds: number, id: number, terms: ChannelTerms = LONG_CHANNEL): number {
   const target = Math.log(id);
   let v = initialOverdrive(model, beta, n, ut, lambda, vds, id);
   let lo = -Infinity;
@@ -28,7 +29,7 @@ export function overdriveForCurrent(model: CurrentModel, beta: number, n: number
   let best = v;
   let bestError = Infinity;
   for (let iteration = 0; iteration < MAX_ITERATIONS; iteration++) {
-    drainCurrentInto(model, beta, n, ut, lambda, v, vds, scratch);
+    drainCurrentInto(model, beta, n, ut, lambda, v, vds, scratch, terms);
     const error = scratch[ID] > 0 ? Math.log(scratch[ID]) - target : -Infinity;
     if (Math.abs(error) < bestError) {
       best = v;
@@ -58,7 +59,7 @@ function initialOverdrive(model: CurrentModel, beta: number, n: number, ut: numb
     if (strong >= a) return strong;
     return a + (a / 2) * Math.log(id / (p * -Math.expm1(-vds / ut)));
   }
-  const softplus = Math.sqrt(id / p);
+  const softplus = Math.sqrt((id * n) / p);
   const x = softplus > 30 ? softplus : Math.log(Math.expm1(softplus));
   return Number.isFinite(x) ? a * x : 0;
 }
@@ -69,7 +70,7 @@ function initialOverdrive(model: CurrentModel, beta: number, n: number, ut: numb
  * above 50 V (GM_ID_TOO_LOW). All-region: Newton on gm/ID in x = VOV/(2nUT) inside a bisecting bracket;
  * square law: closed form (2/gm·ID in saturation, 1/(gm/ID) + VDS/2 in triode).
  */
-export function overdriveForGmId(model: CurrentModel, n: number, ut: number, vds: number, gmId: number): number {
+export function overdriveForGmId(model: CurrentModel, n: number, ut: number, vds: number, gmId: number, terms: ChannelTerms = LONG_CHANNEL): number {
   const limit = gmIdLimit(n, ut);
   if (!(gmId < limit)) {
     throw new EngineError(
@@ -78,7 +79,7 @@ export function overdriveForGmId(model: CurrentModel, n: number, ut: number, vds
       'gmId',
     );
   }
-  return model === 'square-law' ? squareLawOverdriveForGmId(n, ut, vds, gmId) : allRegionOverdriveForGmId(n, ut, vds, gmId);
+  return model === 'square-law' ? squareLawOverdriveForGmId(n, ut, vds, gmId) : allRegionOverdriveForGmId(n, ut, vds, gmId, terms);
 }
 
 function squareLawOverdriveForGmId(n: number, ut: number, vds: number, gmId: number): number {
@@ -94,28 +95,28 @@ function squareLawOverdriveForGmId(n: number, ut: number, vds: number, gmId: num
   return checkOverdrive(vov, gmId);
 }
 
-function gmIdAt(a: number, n: number, ut: number, vds: number, x: number): number {
-  drainCurrentInto('all-region', 1, n, ut, 0, a * x, vds, scratch);
+function gmIdAt(a: number, n: number, ut: number, vds: number, x: number, terms: ChannelTerms): number {
+  drainCurrentInto('all-region', 1, n, ut, 0, a * x, vds, scratch, terms);
   return scratch[GM_ID];
 }
 
-function allRegionOverdriveForGmId(n: number, ut: number, vds: number, gmId: number): number {
+function allRegionOverdriveForGmId(n: number, ut: number, vds: number, gmId: number, terms: ChannelTerms): number {
   const a = 2 * n * ut;
   const xMax = MAX_OVERDRIVE / a;
-  if (gmIdAt(a, n, ut, vds, xMax) > gmId) return checkOverdrive(Infinity, gmId);
+  if (gmIdAt(a, n, ut, vds, xMax, terms) > gmId) return checkOverdrive(Infinity, gmId);
   const t = (gmId * a) / 2;
   let x = t <= 0.5 ? 1 / t : Math.log(2 * (1 - t));
   let lo = -Infinity;
   let hi = xMax;
   for (let iteration = 0; iteration < MAX_ITERATIONS; iteration++) {
-    const g = gmIdAt(a, n, ut, vds, x);
+    const g = gmIdAt(a, n, ut, vds, x, terms);
     const error = g - gmId;
     if (Math.abs(error) <= 1e-12 * gmId) return a * x;
     if (error > 0) lo = x;
     else hi = x;
     if (hi - lo <= 1e-15 * Math.max(1, Math.abs(x))) return a * x;
     const step = 1e-7 * Math.max(1, Math.abs(x));
-    const slope = (gmIdAt(a, n, ut, vds, x + step) - g) / step;
+    const slope = (gmIdAt(a, n, ut, vds, x + step, terms) - g) / step;
     let next = slope < 0 ? x - error / slope : Number.NaN;
     if (!(next > lo && next < hi)) next = Number.isFinite(lo) ? 0.5 * (lo + hi) : x - Math.max(1, Math.abs(x));
     x = next;

@@ -1,4 +1,8 @@
+import type { DeviceParams } from '../schemas/process.js';
 import { type CurrentModel, KERNEL_OUTPUTS, VDSAT, drainCurrentInto } from './drain-current.js';
+import { type ChannelTerms, LONG_CHANNEL } from './short-channel.js';
+import { slopeFactor } from './slope-factor.js';
+import { bodyEffectSlope } from './threshold.js';
 
 export type Region = 'weak' | 'moderate' | 'strong';
 
@@ -8,7 +12,11 @@ const scratch = new Float64Array(KERNEL_OUTPUTS);
 export const WEAK_INVERSION_IC = 0.1;
 export const STRONG_INVERSION_IC = 10;
 
-/** IC = ID / I_spec, I_spec = 2·n·β·UT² (EKV normalisation; Enz & Vittoz, Charge-Based MOS Transistor Modeling, Wiley, 2006). */
+/**
+ * IC = ID / I_spec, I_spec = 2·n·β·UT² (EKV normalisation; Enz & Vittoz, Charge-Based MOS Transistor Modeling,
+ * Wiley, 2006). The all-region model carries the same I_spec, so IC = ln²(1 + e^(VOV/(2nUT))) in saturation and
+ * IC = 1 at VOV = 2nUT·ln(e − 1) (without the short-channel terms).
+ */
 export function inversionCoefficient(id: number, beta: number, n: number, ut: number): number {
   return id / (2 * n * beta * ut * ut);
 }
@@ -19,13 +27,23 @@ export function regionOf(ic: number): Region {
 }
 
 /**
- * VDSsat in volts. All-region: 2nUT·ln(1 + eˣ) + 4nUT·(1 − σ(x)), x = VOV/(2nUT), σ the logistic function:
- * → VOV in strong inversion, → 4nUT in weak inversion (where the model's reverse term e^(−VDS/(nUT)) is 1.8 %), smooth between.
+ * VDSsat in volts. All-region: V_P/n + 4UT·(1 − σ(x)), V_P = 2nUT·ln(1 + eˣ), x = VOV/(2nUT), σ the logistic
+ * function: → VOV/n in strong inversion (lowered further by velocity saturation, see drain-current.ts), → 4UT in
+ * weak inversion (where the reverse term e^(−VDS/UT) is 1.8 %), smooth between.
  * Square law: max(VOV, 4UT): VOV as SPICE level 1, and 4UT in its exponential tail ((1 − e^(−4)) = 98 %).
  */
-export function saturationVoltage(model: CurrentModel, vov: number, n: number, ut: number): number {
-  drainCurrentInto(model, 1, n, ut, 0, vov, 1, scratch);
+export function saturationVoltage(model: CurrentModel, vov: number, n: number, ut: number, terms: ChannelTerms = LONG_CHANNEL): number {
+  drainCurrentInto(model, 1, n, ut, 0, vov, 1, scratch, terms);
   return scratch[VDSAT];
+}
+
+/**
+ * gmb/gm. All-region: n(VSB) − 1, the EKV relation (the gate couples to the channel as 1/n of the body's
+ * pull, Enz & Vittoz 2006). Square law: γ/(2√(2φF + VSB)) = dVT/dVSB, as SPICE level 1 computes it.
+ * The two agree when n is derived from γ.
+ */
+export function gmbRatioOf(model: CurrentModel, params: Pick<DeviceParams, 'gamma' | 'twoPhiF' | 'n'>, vsb: number): number {
+  return model === 'square-law' ? bodyEffectSlope(params.gamma, params.twoPhiF, vsb) : slopeFactor(params, vsb) - 1;
 }
 
 export interface SmallSignal {
@@ -44,12 +62,9 @@ export interface SmallSignal {
   saturated: boolean;
 }
 
-/**
- * Current and small-signal figures at one bias point. gmbRatio = dVT/dVSB = γ/(2√(2φF + VSB)), so
- * gmb = gm·γ/(2√(2φF + VSB)) (n held fixed in that derivative; exact when the process gives n).
- */
-export function smallSignal(model: CurrentModel, beta: number, n: number, ut: number, lambda: number, vov: number, vds: number, gmbRatio: number): SmallSignal {
-  drainCurrentInto(model, beta, n, ut, lambda, vov, vds, scratch);
+/** Current and small-signal figures at one bias point; gmb = gm·gmbRatio (see gmbRatioOf). */
+export function smallSignal(model: CurrentModel, beta: number, n: number, ut: number, lambda: number, vov: number, vds: number, gmbRatio: number, terms: ChannelTerms = LONG_CHANNEL): SmallSignal {
+  drainCurrentInto(model, beta, n, ut, lambda, vov, vds, scratch, terms);
   const [id, gm, gds, gmId, vdsat] = scratch;
   const ic = inversionCoefficient(id, beta, n, ut);
   return {

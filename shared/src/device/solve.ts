@@ -1,12 +1,12 @@
-import { lambdaAtLength } from './channel-length-modulation.js';
+import { channelOf, slopeFactorOf, thresholdOf } from './channel.js';
 import { type CurrentModel, drainCurrent } from './drain-current.js';
 import { EngineError } from './errors.js';
 import { type OperatingPoint, operatingPoint } from './operating-point.js';
 import { overdriveForCurrent, overdriveForGmId } from './overdrive.js';
-import { type PreparedDevice, thresholdAt } from './resolve-device.js';
+import { type PreparedDevice } from './resolve-device.js';
 import { say, voltageNames } from './say.js';
-import { slopeFactor } from './slope-factor.js';
-import { DEFAULT_MAX_FINGER_WIDTH, snapWidth } from './snap-width.js';
+import type { ChannelTerms } from './short-channel.js';
+import { DEFAULT_MAX_FINGER_WIDTH, type SnappedWidth, snapWidth } from './snap-width.js';
 import type { Warning } from '../schemas/warning.js';
 import { sizePlausibilityWarnings } from './size-plausibility.js';
 import { operatingPointWarnings } from './warnings.js';
@@ -54,11 +54,27 @@ export function checkLength(device: PreparedDevice, l: number, field = 'l'): voi
   }
 }
 
-/** The gate overdrive a vov, gmId or vgs constraint asks for (not w), V. */
-export function overdriveOfConstraint(model: CurrentModel, constraint: Exclude<Constraint, 'w'>, value: number, vt: number, n: number, ut: number, vds: number): number {
+/** The gate overdrive a vov, gmId or vgs constraint asks for (not w), V; vt is the threshold at this VDS (DIBL included). */
+export function overdriveOfConstraint(model: CurrentModel, constraint: Exclude<Constraint, 'w'>, value: number, vt: number, n: number, ut: number, vds: number, terms?: ChannelTerms): number {
   if (constraint === 'vov') return value;
   if (constraint === 'vgs') return value - vt;
-  return overdriveForGmId(model, n, ut, vds, value);
+  return overdriveForGmId(model, n, ut, vds, value, terms);
+}
+
+/**
+ * The drawn width for an effective width the current needs: every finger loses ΔW, so the drawn width
+ * is Weff + fingers·ΔW, snapped; the finger count settles within a few rounds.
+ */
+function drawnWidthFor(weff: number, dw: number, params: { wgrid: number; wmin: number }, maxFingerWidth: number): { snapped: SnappedWidth; wRequired: number } {
+  let fingers = 1;
+  for (let round = 0; round < 4; round++) {
+    const wRequired = weff + fingers * dw;
+    const snapped = snapWidth(wRequired, params.wgrid, params.wmin, maxFingerWidth);
+    if (snapped.fingers === fingers || dw === 0) return { snapped, wRequired };
+    fingers = snapped.fingers;
+  }
+  const wRequired = weff + fingers * dw;
+  return { snapped: snapWidth(wRequired, params.wgrid, params.wmin, maxFingerWidth), wRequired };
 }
 
 /**
@@ -68,36 +84,42 @@ export function overdriveOfConstraint(model: CurrentModel, constraint: Exclude<C
  * is kept and the reached ID is reported; for a w target VGS is solved for ID and must stay ≤ vdd.
  */
 export function solveSize(device: PreparedDevice, model: CurrentModel, target: SizeTarget): Sizing {
-  const { params, ut, kp } = device;
+  const { params, ut } = device;
   const { id, l, vds, vsb } = target;
   const constraint = constraintOf(target);
   checkLength(device, l);
-  const vt = thresholdAt(device, vsb);
-  const n = slopeFactor(params, vsb);
-  const lambda = lambdaAtLength(params, l);
+  // The channel per metre of effective width (no finger has lost ΔW yet): kp(L, T)/Leff, λ, the short-channel terms.
+  const perWidth = channelOf(device, model, 1, l, 0);
+  const { lambda, terms } = perWidth;
+  const vt = thresholdOf(device, perWidth, vsb, vds);
+  const n = slopeFactorOf(device, perWidth, vsb);
   const maxFingerWidth = target.maxFingerWidth ?? DEFAULT_MAX_FINGER_WIDTH;
+  const dw = model === 'square-law' ? 0 : (params.dw ?? 0);
 
-  let wRequired: number;
+  let drawn: { snapped: SnappedWidth; wRequired: number };
   if (constraint === 'w') {
-    wRequired = target.w as number;
-    if (wRequired < params.wmin) throw new EngineError('W_BELOW_WMIN', `W = ${say(wRequired, 'm')} is below the process minimum ${say(params.wmin, 'm')}`, 'w');
+    const w = target.w as number;
+    if (w < params.wmin) throw new EngineError('W_BELOW_WMIN', `W = ${say(w, 'm')} is below the process minimum ${say(params.wmin, 'm')}`, 'w');
+    if (!(w <= MAX_WIDTH)) throw new EngineError('W_TOO_LARGE', `W = ${say(w, 'm')} is more than ${say(MAX_WIDTH, 'm')}`, 'w');
+    drawn = { snapped: snapWidth(w, params.wgrid, params.wmin, maxFingerWidth), wRequired: w };
   } else {
-    const vov = overdriveOfConstraint(model, constraint, target[constraint] as number, vt, n, ut, vds);
-    wRequired = (id / drainCurrent(model, kp, n, ut, lambda, vov, vds)) * l;
+    const vov = overdriveOfConstraint(model, constraint, target[constraint] as number, vt, n, ut, vds, terms);
+    const weff = id / drainCurrent(model, perWidth.beta, n, ut, lambda, vov, vds, terms);
+    if (!(weff <= MAX_WIDTH)) {
+      throw new EngineError('W_TOO_LARGE', `This target needs W = ${say(weff, 'm')}, more than ${say(MAX_WIDTH, 'm')}; raise the overdrive or lower gm/ID`, constraint);
+    }
+    drawn = drawnWidthFor(weff, dw, params, maxFingerWidth);
   }
-  if (!(wRequired <= MAX_WIDTH)) {
-    throw new EngineError('W_TOO_LARGE', `This target needs W = ${say(wRequired, 'm')}, more than ${say(MAX_WIDTH, 'm')}; raise the overdrive or lower gm/ID`, constraint === 'w' ? 'w' : constraint);
-  }
-  const snapped = snapWidth(wRequired, params.wgrid, params.wmin, maxFingerWidth);
-  const beta = (kp * snapped.w) / l;
+  const { snapped, wRequired } = drawn;
+  const beta = channelOf(device, model, snapped.w, l, snapped.fingers).beta;
 
   let vgs: number;
   if (constraint === 'vgs') {
     vgs = target.vgs as number;
   } else {
-    vgs = vt + overdriveForCurrent(model, beta, n, ut, lambda, vds, id);
+    vgs = vt + overdriveForCurrent(model, beta, n, ut, lambda, vds, id, terms);
     if (constraint === 'w' && vgs > device.vdd) {
-      const most = drainCurrent(model, beta, n, ut, lambda, device.vdd - vt, vds);
+      const most = drainCurrent(model, beta, n, ut, lambda, device.vdd - vt, vds, terms);
       throw new EngineError(
         'ID_NOT_REACHABLE_BELOW_VDD',
         `W = ${say(snapped.w, 'm')} cannot carry ${say(id, 'A')} with ${voltageNames(device.polarity).vgs} ≤ VDD = ${say(device.vdd, 'V')}: it would need ${voltageNames(device.polarity).vgs} = ${say(vgs, 'V')}; at VDD it carries ${say(most, 'A')}`,
@@ -106,7 +128,7 @@ export function solveSize(device: PreparedDevice, model: CurrentModel, target: S
     }
   }
 
-  const op = operatingPoint(device, model, snapped.w, l, { vgs, vds, vsb });
+  const op = operatingPoint(device, model, snapped.w, l, { vgs, vds, vsb }, snapped.fingers);
   const warnings = operatingPointWarnings(device, model, op);
   if (snapped.raisedToWmin) {
     warnings.push({

@@ -51,7 +51,8 @@ export function cautions(model: CurrentModel, inputs: SeriesInputs, outputs: Ker
   return warnings;
 }
 
-const CAUTIONS: readonly (readonly [WarningCode, string])[] = [
+/** The sentence of each series caution (the table model's sweeps use them too). */
+export const CAUTIONS: readonly (readonly [WarningCode, string])[] = [
   ['VDS_BELOW_VDSSAT', 'VDS is below VDSsat (the device is not saturated)'],
   ['SQUARE_LAW_NEAR_THRESHOLD', 'VOV is below 4·n·UT, where the square law does not hold; use the all-region model'],
   ['VGS_ABOVE_VDD', 'VGS is above vdd'],

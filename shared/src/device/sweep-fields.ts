@@ -1,18 +1,24 @@
 import type { SweepField } from '../schemas/sweep.js';
-import { gateDrainCapacitance, gateSourceCapacitance, transitFrequency } from './capacitance.js';
-import { ID, KERNEL_OUTPUTS, allRegionCurrentInto, maskOf } from './drain-current.js';
+import { gateCapacitances, transitFrequency } from './capacitance.js';
+import { maskOf } from './drain-current.js';
+import { leakage } from './leakage.js';
 import { pelgromPairSigma } from './mismatch.js';
 import type { PreparedDevice } from './resolve-device.js';
-import { slopeFactor } from './slope-factor.js';
 import type { KernelOutputs, SeriesInputs } from './sweep-inputs.js';
 
 /** The columns of the fields asked for, each a fresh array computed in its own pass over the points. */
-export function fieldColumns(fields: readonly SweepField[], inputs: SeriesInputs, outputs: KernelOutputs, device: PreparedDevice, count: number): Partial<Record<SweepField, Float64Array>> {
-  const { w, l, vt, vov, vds, vsb, tempC, n, gmbRatio, beta, ut, vtZeroBias, lambda } = inputs;
-  const [mw, ml, mt, mo, md, mn, mg, mb, mu, mz, mLambda] = [w, l, vt, vov, vds, n, gmbRatio, beta, ut, vtZeroBias, lambda].map(maskOf);
+export function fieldColumns(
+  fields: readonly SweepField[],
+  inputs: SeriesInputs,
+  outputs: KernelOutputs,
+  deviceAt: (i: number) => PreparedDevice,
+  count: number,
+): Partial<Record<SweepField, Float64Array>> {
+  const { w, l, leff, vt, vov, vds, vsb, tempC, n, gmbRatio, beta, ut, fingers, dw } = inputs;
+  const [mw, ml, mLeff, mt, mo, md, mn, mg, mb, mu] = [w, l, leff, vt, vov, vds, n, gmbRatio, beta, ut].map(maskOf);
   const { id, gm, gds, gmId, vdsat } = outputs;
-  const { params, cox, vdd } = device;
-  const { cgdo, avt, ldiff } = params;
+  const { params, cox } = deviceAt(0);
+  const { cgdo, avt } = params;
   const columns: Partial<Record<SweepField, Float64Array>> = {};
   const want = (field: SweepField) => fields.includes(field);
   const derive = (compute: (i: number) => number) => {
@@ -41,23 +47,15 @@ export function fieldColumns(fields: readonly SweepField[], inputs: SeriesInputs
   if (want('gmId')) columns.gmId = gmId;
   if (want('intrinsicGain')) columns.intrinsicGain = derive((i) => gm[i] / gds[i]);
   if (want('ic') || want('region')) columns.ic = derive((i) => id[i] / (2 * n[i & mn] * beta[i & mb] * ut[i & mu] * ut[i & mu]));
-  const cgs = (i: number) => gateSourceCapacitance(w[i & mw], l[i & ml], cox, cgdo);
-  const cgd = (i: number) => gateDrainCapacitance(w[i & mw], cgdo);
-  if (want('cgs')) columns.cgs = derive(cgs);
-  if (want('cgd')) columns.cgd = derive(cgd);
-  if (want('ft')) columns.ft = derive((i) => transitFrequency(gm[i], cgs(i), cgd(i)));
+  const capacitancesAt = (i: number) =>
+    gateCapacitances(w[i & mw] - fingers * dw, leff[i & mLeff], cox, cgdo, { vov: vov[i & mo], vds: vds[i & md], n: n[i & mn], ut: ut[i & mu] });
+  if (want('cgs')) columns.cgs = derive((i) => capacitancesAt(i).cgs);
+  if (want('cgd')) columns.cgd = derive((i) => capacitancesAt(i).cgd);
+  if (want('cgg')) columns.cgg = derive((i) => capacitancesAt(i).cgg);
+  if (want('ft')) columns.ft = derive((i) => transitFrequency(gm[i], capacitancesAt(i).cgg));
   if (want('sigmaVt')) columns.sigmaVt = derive((i) => pelgromPairSigma(avt, w[i & mw], l[i & ml]));
   if (want('ioff')) {
-    const out = new Float64Array(KERNEL_OUTPUTS);
-    const nAtZeroBias = slopeFactor(params, 0);
-    const jg = params.jg ?? 0;
-    const js = params.js ?? 0;
-    columns.ioff = derive((i) => {
-      const vt0 = vtZeroBias[i & mz];
-      if (vt0 < 0) return Number.NaN;
-      allRegionCurrentInto(beta[i & mb], nAtZeroBias, ut[i & mu], lambda[i & mLambda], -vt0, vdd, out);
-      return out[ID] + jg * w[i & mw] * l[i & ml] + js * w[i & mw] * ldiff;
-    });
+    columns.ioff = derive((i) => leakage(deviceAt(i), w[i & mw], l[i & ml], fingers).ioff ?? Number.NaN);
   }
   return columns;
 }

@@ -8,6 +8,13 @@ export class Scratch {
   readonly n: Float64Array;
   readonly gmbRatio: Float64Array;
   readonly lambda: Float64Array;
+  readonly leff: Float64Array;
+  readonly theta: Float64Array;
+  readonly theta2: Float64Array;
+  readonly esat: Float64Array;
+  readonly clm: Float64Array;
+  readonly eta: Float64Array;
+  readonly vtShift: Float64Array;
   readonly w: Float64Array;
   readonly beta: Float64Array;
   readonly vov: Float64Array;
@@ -27,6 +34,13 @@ export class Scratch {
     this.n = make();
     this.gmbRatio = make();
     this.lambda = make();
+    this.leff = make();
+    this.theta = make();
+    this.theta2 = make();
+    this.esat = make();
+    this.clm = make();
+    this.eta = make();
+    this.vtShift = make();
     this.w = make();
     this.beta = make();
     this.vov = make();
@@ -48,9 +62,24 @@ export interface SeriesInputs {
   n: Float64Array;
   gmbRatio: Float64Array;
   l: Float64Array;
+  /** Effective length (= l for the square law), m. */
+  leff: Float64Array;
   lambda: Float64Array;
+  /** Short-channel terms at leff (see short-channel.ts); constants 0/Infinity for the square law. */
+  theta: Float64Array;
+  theta2: Float64Array;
+  esat: Float64Array;
+  clm: Float64Array;
+  eta: Float64Array;
+  /** VT shift of the length from the long-channel VT, V (all-region only). */
+  vtShift: Float64Array;
   vds: Float64Array;
+  /** Drawn width (all fingers), m. */
   w: Float64Array;
+  /** Fingers of the drawn width (each loses ΔW); one value for the whole series. */
+  fingers: number;
+  /** ΔW per finger of the model (0 for the square law), m. */
+  dw: number;
   beta: Float64Array;
   vov: Float64Array;
 }

@@ -2,21 +2,23 @@ import { SWEEP_FIELDS, type SweepField, type SweepParam, type SweepRequest } fro
 import type { Warning } from '../schemas/warning.js';
 import type { Process } from '../schemas/process.js';
 import { celsiusToKelvin } from '../units/temperature.js';
-import { lambdaAtLength } from './channel-length-modulation.js';
+import { channelOf } from './channel.js';
 import { type CurrentModel, allRegionColumns, maskOf, squareLawColumns } from './drain-current.js';
 import { EngineError } from './errors.js';
 import { kpAtTemperature } from './mobility.js';
 import { overdriveForCurrent, overdriveForGmId } from './overdrive.js';
 import { prepareDevice } from './resolve-device.js';
 import { say } from './say.js';
+import { mobilityExponentAt } from './short-channel.js';
 import { slopeFactor } from './slope-factor.js';
+import { gmbRatioOf } from './small-signal.js';
 import { MAX_WIDTH, type Sizing, checkLength, solveSize } from './solve.js';
 import { Failures, cautions } from './sweep-cautions.js';
 import { fieldColumns } from './sweep-fields.js';
 import { type KernelOutputs, Scratch, type SeriesInputs, one } from './sweep-inputs.js';
 import { sweepValues } from './sweep-values.js';
 import { thermalVoltage } from './thermal-voltage.js';
-import { bodyEffect, bodyEffectSlope, thresholdVoltage } from './threshold.js';
+import { bodyEffect, thresholdVoltage } from './threshold.js';
 
 /** One series of a sweep in columns: the swept values and one Float64Array per field (NaN where a point has no answer). */
 export interface SweepSeriesColumns {
@@ -46,7 +48,7 @@ export interface SweepColumns {
  * gmId replaces the request's constraint. Every figure is analytic; a point with no answer is NaN in its
  * columns and counted in the series warnings. The request must already be parsed (sweepRequestSchema).
  */
-export function sweep(request: SweepRequest, process: Process): SweepColumns {
+export function sweep(request: SweepRequest & { model: CurrentModel }, process: Process): SweepColumns {
   const baseDevice = prepareDevice(process, request.polarity, { corner: request.corner, temperature: request.temperature, flavour: request.flavour });
   const base = solveSize(baseDevice, request.model, request);
   const fields = request.fields ?? SWEEP_FIELDS;
@@ -64,7 +66,7 @@ export function sweep(request: SweepRequest, process: Process): SweepColumns {
 type GateMode = 'swept-vgs' | 'swept-vov' | 'swept-gmId' | 'held-vgs' | 'given-vov' | 'given-vgs' | 'given-gmId' | 'solve-for-id';
 
 function sweepSeries(
-  request: SweepRequest,
+  request: SweepRequest & { model: CurrentModel },
   process: Process,
   base: Sizing,
   corner: string,
@@ -85,30 +87,43 @@ function sweepSeries(
   const count = values.length;
   const failures = new Failures(count);
   const { gamma, twoPhiF } = params;
+  const squareLaw = model === 'square-law';
+  const channel = channelOf(device, model, base.w, request.l, base.fingers);
+  const { terms } = channel;
 
   // 1. Conditions: the series' own, and the swept one point by point.
   const inputs: SeriesInputs = {
     tempC: param === 'temperature' ? values : one(device.temperature),
     ut: one(device.ut),
-    kp: one(device.kp),
+    kp: one(channel.kp),
     vtZeroBias: one(device.vtZeroBias),
     vsb: param === 'vsb' ? values : one(request.vsb),
     vt: one(Number.NaN),
-    n: one(slopeFactor(params, request.vsb)),
-    gmbRatio: one(bodyEffectSlope(gamma, twoPhiF, request.vsb)),
+    n: one(slopeFactor(params, request.vsb) + terms.nShift),
+    gmbRatio: one(gmbRatioOf(model, params, request.vsb)),
     l: param === 'l' ? values : one(request.l),
-    lambda: one(lambdaAtLength(params, request.l)),
+    leff: one(channel.leff),
+    lambda: one(channel.lambda),
+    theta: one(terms.theta),
+    theta2: one(terms.theta2),
+    esat: one(terms.esat),
+    clm: one(terms.clm),
+    eta: one(terms.eta),
+    vtShift: one(terms.vtShift),
     vds: param === 'vds' ? values : one(request.vds),
     w: one(base.w),
+    fingers: base.fingers,
+    dw: squareLaw ? 0 : (params.dw ?? 0),
     beta: one(Number.NaN),
     vov: one(Number.NaN),
   };
   if (param === 'temperature') {
     const { ut, kp, vtZeroBias } = scratch;
+    const muExp = squareLaw ? params.muExp : mobilityExponentAt(params, channel.leff);
     for (let i = 0; i < count; i++) {
       const tempK = celsiusToKelvin(values[i]);
       ut[i] = thermalVoltage(tempK);
-      kp[i] = kpAtTemperature(params.kp, tempK, tnomK, params.muExp, kpScale);
+      kp[i] = kpAtTemperature(params.kp, tempK, tnomK, muExp, kpScale);
       vtZeroBias[i] = thresholdVoltage(params, 0, tempK, tnomK, dvt);
     }
     Object.assign(inputs, { ut, kp, vtZeroBias });
@@ -119,8 +134,8 @@ function sweepSeries(
     for (let i = 0; i < count; i++) {
       try {
         vt[i] = vt0 + bodyEffect(gamma, twoPhiF, values[i]);
-        n[i] = slopeFactor(params, values[i]);
-        gmbRatio[i] = bodyEffectSlope(gamma, twoPhiF, values[i]);
+        n[i] = slopeFactor(params, values[i]) + terms.nShift;
+        gmbRatio[i] = gmbRatioOf(model, params, values[i]);
       } catch (error) {
         failures.add(i, error);
       }
@@ -137,24 +152,36 @@ function sweepSeries(
     }
   }
   if (param === 'l') {
-    const { lambda } = scratch;
+    const { kp, leff, lambda, theta, theta2, esat, clm, eta, vtShift, n } = scratch;
+    const bodyN = slopeFactor(params, request.vsb);
     for (let i = 0; i < count; i++) {
       try {
         checkLength(device, values[i], 'sweep');
-        lambda[i] = lambdaAtLength(params, values[i]);
+        const at = channelOf(device, model, 1, values[i], 0, 'sweep');
+        kp[i] = at.kp;
+        leff[i] = at.leff;
+        lambda[i] = at.lambda;
+        theta[i] = at.terms.theta;
+        theta2[i] = at.terms.theta2;
+        esat[i] = at.terms.esat;
+        clm[i] = at.terms.clm;
+        eta[i] = at.terms.eta;
+        vtShift[i] = at.terms.vtShift;
+        n[i] = bodyN + at.terms.nShift;
       } catch (error) {
         failures.add(i, error);
       }
     }
-    inputs.lambda = lambda;
+    Object.assign(inputs, { kp, leff, lambda, theta, theta2, esat, clm, eta, vtShift, n });
   }
+  inputs.vt = shiftThreshold(inputs, count);
 
-  // 2. Width and gate: hold "w" keeps the request's sized width; hold "id" sizes per square and scales below.
+  // 2. Width and gate: hold "w" keeps the request's sized width; hold "id" sizes per metre of width and scales below.
   const gateSwept = param === 'vov' || param === 'vgs' || param === 'gmId';
-  const perSquare = hold === 'id' && (gateSwept || base.constraint !== 'w');
+  const perWidth = hold === 'id' && (gateSwept || base.constraint !== 'w');
   const mode: GateMode = gateSwept ? (`swept-${param}` as GateMode) : hold === 'w' ? 'held-vgs' : base.constraint === 'w' ? 'solve-for-id' : (`given-${base.constraint}` as GateMode);
   const given = mode.startsWith('given-') ? ((request as Record<string, unknown>)[base.constraint] as number) : Number.NaN;
-  inputs.beta = betaColumn(inputs, perSquare, count, scratch.beta);
+  inputs.beta = betaColumn(inputs, perWidth, count, scratch.beta);
   inputs.vov = overdriveColumn(mode, model, values, given, base.vgs, request.id, vdd, inputs, count, scratch.vov, failures);
 
   // 3. The kernel: ID, gm, gds, gm/ID, VDSsat for every point, analytic.
@@ -168,37 +195,50 @@ function sweepSeries(
   const kernel = { ...inputs, ...outputs };
   if (model === 'square-law') squareLawColumns(count, kernel);
   else allRegionColumns(count, kernel);
-  if (perSquare) scaleToCurrent(request.id, inputs, outputs, count, scratch.w, failures);
+  if (perWidth) scaleToCurrent(request.id, inputs, outputs, count, scratch.w, failures);
 
   // 4. The fields asked for, then the cautions.
-  const columns = fieldColumns(fields, inputs, outputs, device, count);
+  const deviceAt = param === 'temperature' ? (i: number) => prepareDevice(process, request.polarity, { corner, temperature: values[i], flavour: request.flavour }) : () => device;
+  const columns = fieldColumns(fields, inputs, outputs, deviceAt, count);
   for (const column of Object.values(columns)) failures.blank(column);
   const warnings = [...cautions(model, inputs, outputs, device, failures, count), ...failures.warnings(param)];
   return { corner, temperature, values, columns, warnings };
 }
 
-/** β = kp·W/L per point (hold "w"), or kp alone (per square, hold "id"; scaled once the current is known). */
-function betaColumn(inputs: SeriesInputs, perSquare: boolean, count: number, into: Float64Array): Float64Array {
-  const { kp, w, l } = inputs;
-  if (kp.length === 1 && l.length === 1) return perSquare ? one(kp[0]) : one((kp[0] * w[0]) / l[0]);
-  const [mk, ml] = [kp, l].map(maskOf);
-  for (let i = 0; i < count; i++) into[i] = perSquare ? kp[i & mk] : (kp[i & mk] * w[0]) / l[i & ml];
+/** VT with its length's shift and lowered by DIBL, VT + ΔVT(L) − η·VDS, per point where any of them varies. */
+function shiftThreshold(inputs: SeriesInputs, count: number): Float64Array {
+  const { vt, eta, vds, vtShift } = inputs;
+  if (eta.length === 1 && eta[0] === 0 && vtShift.length === 1 && vtShift[0] === 0) return vt;
+  if (vt.length === 1 && eta.length === 1 && vds.length === 1 && vtShift.length === 1) return one(vt[0] + vtShift[0] - eta[0] * vds[0]);
+  const [mt, me, md, ms] = [vt, eta, vds, vtShift].map(maskOf);
+  const shifted = new Float64Array(count);
+  for (let i = 0; i < count; i++) shifted[i] = vt[i & mt] + vtShift[i & ms] - eta[i & me] * vds[i & md];
+  return shifted;
+}
+
+/** β = kp·Weff/Leff per point (hold "w"), or kp/Leff alone (per metre of effective width, hold "id"; scaled once the current is known). */
+function betaColumn(inputs: SeriesInputs, perWidth: boolean, count: number, into: Float64Array): Float64Array {
+  const { kp, w, leff, fingers, dw } = inputs;
+  const weff = perWidth ? 1 : w[0] - fingers * dw;
+  if (kp.length === 1 && leff.length === 1) return one((kp[0] * weff) / leff[0]);
+  const [mk, ml] = [kp, leff].map(maskOf);
+  for (let i = 0; i < count; i++) into[i] = (kp[i & mk] * weff) / leff[i & ml];
   return into;
 }
 
-/** Hold "id": from the current per square to the width that carries the target, and the figures that scale with it. */
+/** Hold "id": from the current per metre of effective width to the drawn width that carries the target, and the figures that scale with it. */
 function scaleToCurrent(target: number, inputs: SeriesInputs, outputs: KernelOutputs, count: number, w: Float64Array, failures: Failures): void {
-  const { l, kp } = inputs;
+  const { leff, kp, fingers, dw } = inputs;
   const { id, gm, gds } = outputs;
-  const [ml, mk] = [l, kp].map(maskOf);
+  const [ml, mk] = [leff, kp].map(maskOf);
   const beta = new Float64Array(count);
   for (let i = 0; i < count; i++) {
-    const ratio = target / id[i];
-    w[i] = ratio * l[i & ml];
-    beta[i] = kp[i & mk] * ratio;
+    const weff = target / id[i];
+    w[i] = weff + fingers * dw;
+    beta[i] = (kp[i & mk] * weff) / leff[i & ml];
     id[i] = target;
-    gm[i] *= ratio;
-    gds[i] *= ratio;
+    gm[i] *= weff;
+    gds[i] *= weff;
     if (!(w[i] <= MAX_WIDTH)) failures.add(i, new EngineError('W_TOO_LARGE', `This point needs W above ${say(MAX_WIDTH, 'm')}`, 'sweep'));
   }
   inputs.w = w;
@@ -219,8 +259,10 @@ function overdriveColumn(
   into: Float64Array,
   failures: Failures,
 ): Float64Array {
-  const { vt, n, ut, vds, beta, lambda } = inputs;
+  const { vt, n, ut, vds, beta, lambda, theta, theta2, esat, clm, eta } = inputs;
   const [mt, mn, mu, md, mb, ml] = [vt, n, ut, vds, beta, lambda].map(maskOf);
+  const [mTheta, mTheta2, mEsat, mClm, mEta] = [theta, theta2, esat, clm, eta].map(maskOf);
+  const terms = { theta: 0, theta2: 0, esat: Infinity, clm: 0, eta: 0, vtShift: 0, nShift: 0 };
   switch (mode) {
     case 'swept-vov':
       return values;
@@ -240,12 +282,17 @@ function overdriveColumn(
       break;
   }
   for (let i = 0; i < count; i++) {
+    terms.theta = theta[i & mTheta];
+    terms.theta2 = theta2[i & mTheta2];
+    terms.esat = esat[i & mEsat];
+    terms.clm = clm[i & mClm];
+    terms.eta = eta[i & mEta];
     try {
       if (mode === 'solve-for-id') {
-        into[i] = overdriveForCurrent(model, beta[i & mb], n[i & mn], ut[i & mu], lambda[i & ml], vds[i & md], targetId);
+        into[i] = overdriveForCurrent(model, beta[i & mb], n[i & mn], ut[i & mu], lambda[i & ml], vds[i & md], targetId, terms);
         if (vt[i & mt] + into[i] > vdd) throw new EngineError('ID_NOT_REACHABLE_BELOW_VDD', `The width cannot carry ${say(targetId, 'A')} with VGS ≤ vdd = ${say(vdd, 'V')}`, 'id');
       } else {
-        into[i] = overdriveForGmId(model, n[i & mn], ut[i & mu], vds[i & md], mode === 'swept-gmId' ? values[i] : given);
+        into[i] = overdriveForGmId(model, n[i & mn], ut[i & mu], vds[i & md], mode === 'swept-gmId' ? values[i] : given, terms);
       }
     } catch (error) {
       into[i] = Number.NaN;

@@ -26,6 +26,15 @@ function asciiJson(value: unknown): string {
 
 /** The table as bytes; its columns must all be Float32Array or all Float64Array. */
 export function encodeTable(table: LookupTable): Uint8Array {
+  const steps = encodeTableInSteps(table);
+  for (;;) {
+    const step = steps.next();
+    if (step.done) return step.value;
+  }
+}
+
+/** encodeTable one column per step, so that a caller on an event loop can let other work run between them (a full grid's column is megabytes). */
+export function* encodeTableInSteps(table: LookupTable): Generator<void, Uint8Array, void> {
   checkLookupTable(table);
   const first = table.columns[TABLE_FIELDS[0]];
   const type = first instanceof Float64Array ? 'float64' : 'float32';
@@ -40,13 +49,17 @@ export function encodeTable(table: LookupTable): Uint8Array {
   bytes.set(MAGIC, 0);
   new DataView(bytes.buffer).setUint32(4, header.length, true);
   for (let i = 0; i < header.length; i++) bytes[8 + i] = header.charCodeAt(i);
-  TABLE_FIELDS.forEach((field, index) => {
+  for (const [index, field] of TABLE_FIELDS.entries()) {
     writeColumn(bytes, dataStart + index * points * bytesPerValue, table.columns[field]);
-  });
+    yield;
+  }
   return bytes;
 }
 
-/** Reads what encodeTable wrote; TABLE_INVALID when the bytes are not a table of this format. */
+/**
+ * Reads what encodeTable wrote; TABLE_INVALID when the bytes are not a table of this format. On a little-endian
+ * platform the columns are views on `bytes` (no copy: a full grid is tens of MB), so the caller must not change them.
+ */
 export function decodeTable(bytes: Uint8Array): LookupTable {
   if (bytes.length < 8 || MAGIC.some((byte, i) => bytes[i] !== byte)) throw new EngineError('TABLE_INVALID', 'These bytes are not a Channelwright table', 'table');
   const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
@@ -92,6 +105,9 @@ function writeColumn(bytes: Uint8Array, offset: number, column: Float32Array | F
 }
 
 function readColumn(bytes: Uint8Array, offset: number, count: number, type: Header['type']): Float32Array | Float64Array {
+  const size = type === 'float64' ? 8 : 4;
+  const at = bytes.byteOffset + offset;
+  if (littleEndianPlatform && at % size === 0) return type === 'float64' ? new Float64Array(bytes.buffer, at, count) : new Float32Array(bytes.buffer, at, count);
   const column = type === 'float64' ? new Float64Array(count) : new Float32Array(count);
   if (littleEndianPlatform) {
     new Uint8Array(column.buffer).set(bytes.subarray(offset, offset + column.byteLength));

@@ -37,6 +37,21 @@ export interface TableConditions {
 }
 
 export function prepareTable(table: LookupTable): PreparedTable {
+  const steps = prepareTableInSteps(table);
+  for (;;) {
+    const step = steps.next();
+    if (step.done) return step.value;
+  }
+}
+
+/** Values worked per step of prepareTableInSteps. */
+const PREPARE_STEP = 1 << 17;
+
+/**
+ * prepareTable in steps of about PREPARE_STEP values, so that a caller on an event loop can let other work run between
+ * them (a full grid is some 10 million values: a few hundred milliseconds in one go). The result is prepareTable's.
+ */
+export function* prepareTableInSteps(table: LookupTable): Generator<void, PreparedTable, void> {
   checkLookupTable(table);
   const columns = {} as PreparedTable['columns'];
   for (const field of TABLE_FIELDS) {
@@ -46,7 +61,11 @@ export function prepareTable(table: LookupTable): PreparedTable {
       continue;
     }
     const logs = stored instanceof Float64Array ? new Float64Array(stored.length) : new Float32Array(stored.length);
-    for (let i = 0; i < stored.length; i++) logs[i] = Math.log(Math.max(stored[i], LOG_FLOOR));
+    for (let start = 0; start < stored.length; start += PREPARE_STEP) {
+      const end = Math.min(stored.length, start + PREPARE_STEP);
+      for (let i = start; i < end; i++) logs[i] = Math.log(Math.max(stored[i], LOG_FLOOR));
+      yield;
+    }
     columns[field] = logs;
   }
   const { count } = table.grid.vgs;
@@ -58,6 +77,7 @@ export function prepareTable(table: LookupTable): PreparedTable {
       if (columns.gm[at + g] - columns.id[at + g] > columns.gm[at + best] - columns.id[at + best]) best = g;
     }
     gmIdPeaks[line] = best;
+    if ((line + 1) % Math.max(1, Math.floor(PREPARE_STEP / count)) === 0) yield;
   }
   return { grid: table.grid, columns, lnLengths: Float64Array.from(table.grid.lengths, Math.log), gmIdPeaks };
 }

@@ -1,10 +1,12 @@
 import { EngineError } from './errors.js';
-import type { TableWarning } from './lookup-table.js';
+import { type TableWarning, widthScale } from './lookup-table.js';
 import { type PreparedTable, type TableConditions, type TableLine, tableLine } from './table-lookup.js';
 
 /** A device's operating point from a table, SI units, polarity-normalised voltages and positive currents. */
 export interface TableOperatingPoint extends TableConditions {
+  /** Drawn width, all fingers, m. */
   w: number;
+  fingers: number;
   vgs: number;
   id: number;
   gm: number;
@@ -30,11 +32,11 @@ export interface TableOperatingPoint extends TableConditions {
   warnings: TableWarning[];
 }
 
-/** The operating point of a device of width w at vgs on a table line: currents, conductances and capacitances scale with w / referenceWidth. */
-export function operatingPointOnLine(line: TableLine, w: number, vgs: number): TableOperatingPoint {
+/** The operating point of a device of width w (in `fingers` fingers) at vgs on a table line: currents, conductances and capacitances scale with the effective width (widthScale). */
+export function operatingPointOnLine(line: TableLine, w: number, vgs: number, fingers = 1): TableOperatingPoint {
   if (!(w > 0) || !Number.isFinite(w)) throw new EngineError('VALIDATION_FAILED', 'W must be a positive width', 'w');
   line.checkVgs(vgs, 'vgs');
-  const scale = w / line.grid.referenceWidth;
+  const scale = widthScale(line.grid, w, fingers);
   const id = line.valueAt('id', vgs) * scale;
   const gm = line.valueAt('gm', vgs) * scale;
   const gds = line.valueAt('gds', vgs) * scale;
@@ -49,6 +51,7 @@ export function operatingPointOnLine(line: TableLine, w: number, vgs: number): T
     vds,
     vsb,
     w,
+    fingers,
     vgs,
     id,
     gm,
@@ -70,7 +73,7 @@ export function operatingPointOnLine(line: TableLine, w: number, vgs: number): T
   };
 }
 
-/** The operating point of a device of width w (m) at vgs (V) under these conditions, from the table. */
-export function tableOperatingPoint(prepared: PreparedTable, device: TableConditions & { w: number; vgs: number }): TableOperatingPoint {
-  return operatingPointOnLine(tableLine(prepared, device), device.w, device.vgs);
+/** The operating point of a device of width w (m; in `fingers` fingers, default 1) at vgs (V) under these conditions, from the table. */
+export function tableOperatingPoint(prepared: PreparedTable, device: TableConditions & { w: number; vgs: number; fingers?: number }): TableOperatingPoint {
+  return operatingPointOnLine(tableLine(prepared, device), device.w, device.vgs, device.fingers);
 }

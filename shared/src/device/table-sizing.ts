@@ -1,5 +1,5 @@
 import { EngineError } from './errors.js';
-import { vgsOfNode } from './lookup-table.js';
+import { vgsOfNode, widthForScale, widthScale } from './lookup-table.js';
 import { say, sayGmId } from './say.js';
 import { type Constraint, constraintOf, MAX_WIDTH } from './solve.js';
 import { type PreparedTable, type TableConditions, type TableLine, tableLine } from './table-lookup.js';
@@ -8,6 +8,8 @@ import { operatingPointOnLine, type TableOperatingPoint } from './table-operatin
 /** What to size for from a table: ID (A) under the conditions, and exactly one of vov, gmId, w, vgs. */
 export interface TableSizeTarget extends TableConditions {
   id: number;
+  /** Fingers of the width (each loses the table's width offset); 1 when absent. */
+  fingers?: number;
   vov?: number;
   gmId?: number;
   w?: number;
@@ -35,21 +37,21 @@ export function sizeFromTable(prepared: PreparedTable, target: TableSizeTarget):
     throw new EngineError('VALIDATION_FAILED', `${constraint} must be a positive number`, constraint);
   }
   const line = tableLine(prepared, target);
-  const reference = line.grid.referenceWidth;
+  const fingers = target.fingers ?? 1;
   let vgs: number;
   let w: number;
   if (constraint === 'w') {
     w = value;
-    vgs = vgsForCurrentDensity(line, (id / w) * reference, 'w');
+    vgs = vgsForCurrentDensity(line, id / widthScale(line.grid, w, fingers), 'w');
   } else {
     vgs = constraint === 'gmId' ? vgsForGmId(line, value) : constraint === 'vov' ? vgsForOverdrive(line, value) : value;
     line.checkVgs(vgs, constraint);
-    w = (id / line.valueAt('id', vgs)) * reference;
+    w = widthForScale(line.grid, id / line.valueAt('id', vgs), fingers);
   }
   if (!(w <= MAX_WIDTH)) {
     throw new EngineError('W_TOO_LARGE', `This target needs W = ${say(w, 'm')}, more than ${say(MAX_WIDTH, 'm')}; raise the overdrive or lower gm/ID`, constraint);
   }
-  const sizing = operatingPointOnLine(line, w, vgs) as TableSizing;
+  const sizing = operatingPointOnLine(line, w, vgs, fingers) as TableSizing;
   sizing.constraint = constraint;
   return sizing;
 }

@@ -4,12 +4,13 @@ import type { OperatingPoint } from './operating-point.js';
 import { gmIdLimit } from './overdrive.js';
 import type { PreparedDevice } from './resolve-device.js';
 import { say, sayGmId, voltageNames } from './say.js';
+import { hasShortChannelTerms } from './short-channel.js';
 
 /** The thresholds of the warnings, documented in docs/model.md. */
 export const WARNING_THRESHOLDS = {
   /** Square law: warn when VOV < 4·n·UT (moderate inversion and below, where it is wrong by > 10 %). */
   squareLawOverdriveInNUt: 4,
-  /** Warn when L < 2·lmin: short-channel effects (velocity saturation, DIBL) are not modelled. */
+  /** Warn when L < 2·lmin: short-channel effects are absent from the model, or only first-order fits in it. */
   lengthOverLmin: 2,
   /** Warn when gm/ID > 90 % of 1/(n·UT): more W buys little more gm. */
   gmIdFractionOfLimit: 0.9,
@@ -29,7 +30,13 @@ export function operatingPointWarnings(device: PreparedDevice, model: CurrentMod
     );
   }
   if (op.l < WARNING_THRESHOLDS.lengthOverLmin * params.lmin) {
-    add('L_NEAR_LMIN', `L = ${say(op.l, 'm')} is less than twice lmin (${say(params.lmin, 'm')}): short-channel effects (velocity saturation, DIBL, VT roll-off) are not modelled and the real current and output resistance will differ.`);
+    const modelled = model === 'all-region' && hasShortChannelTerms(params);
+    add(
+      'L_NEAR_LMIN',
+      modelled
+        ? `L = ${say(op.l, 'm')} is less than twice lmin (${say(params.lmin, 'm')}): the profile's short-channel terms (ΔL, θ, DIBL, channel-length modulation) are first-order fits and VT roll-off is not modelled; check the current and output resistance with the foundry's models.`
+        : `L = ${say(op.l, 'm')} is less than twice lmin (${say(params.lmin, 'm')}): short-channel effects (velocity saturation, DIBL, VT roll-off) are not modelled and the real current and output resistance will differ.`,
+    );
   }
   if (!op.saturated) {
     add('VDS_BELOW_VDSSAT', `${v.vds} = ${say(op.vds, 'V')} is below ${v.vdsat} = ${say(op.vdsat, 'V')}: the device is not saturated (triode); gm and ro are lower than a saturated device would give, though ID is met at this ${v.vds}.`);

@@ -1,8 +1,9 @@
 import type { Polarity, Process } from '../schemas/process.js';
 import { channelCurrentAt } from './channel-current.js';
+import { channelOf, thresholdOf } from './channel.js';
 import type { CurrentModel } from './drain-current.js';
 import { EngineError } from './errors.js';
-import { prepareDevice, thresholdAt } from './resolve-device.js';
+import { prepareDevice } from './resolve-device.js';
 
 export interface ZtcDevice {
   polarity: Polarity;
@@ -11,6 +12,8 @@ export interface ZtcDevice {
   model?: CurrentModel;
   w: number;
   l: number;
+  /** Fingers of the drawn width; 1 when absent. */
+  fingers?: number;
   vds: number;
   vsb: number;
 }
@@ -40,8 +43,9 @@ export function zeroTemperatureCoefficientVgs(process: Process, device: ZtcDevic
   const colder = prepareDevice(process, device.polarity, { ...options, temperature: temperature - STEP_K });
   const hotter = prepareDevice(process, device.polarity, { ...options, temperature: temperature + STEP_K });
   const { w, l, vds, vsb } = device;
-  const slope = (vgs: number) => channelCurrentAt(hotter, model, w, l, vgs, vds, vsb) - channelCurrentAt(colder, model, w, l, vgs, vds, vsb);
-  const vt = thresholdAt(at, vsb);
+  const fingers = device.fingers ?? 1;
+  const slope = (vgs: number) => channelCurrentAt(hotter, model, w, l, vgs, vds, vsb, fingers) - channelCurrentAt(colder, model, w, l, vgs, vds, vsb, fingers);
+  const vt = thresholdOf(at, channelOf(at, model, w, l, fingers), vsb, vds);
   let lo = vt - 0.3;
   let hi = vt + 10;
   if (!(slope(lo) > 0 && slope(hi) < 0)) {
@@ -53,5 +57,5 @@ export function zeroTemperatureCoefficientVgs(process: Process, device: ZtcDevic
     else hi = mid;
   }
   const vgs = 0.5 * (lo + hi);
-  return { vgs, vov: vgs - vt, id: channelCurrentAt(at, model, w, l, vgs, vds, vsb) };
+  return { vgs, vov: vgs - vt, id: channelCurrentAt(at, model, w, l, vgs, vds, vsb, fingers) };
 }

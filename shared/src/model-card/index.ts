@@ -6,3 +6,6 @@ export { ACCEPTED_LEVELS, type CardSection, type ModelCard, ModelCardError, type
 export { parseModelCard } from './parse-model-card.js';
 export { emitModel, emitModelCard, spiceNumber } from './emit-model-card.js';
 export { parseSpiceNumber } from './spice-number.js';
+export { type CardCheck, type CardProblem, checkModelCard } from './check-model-card.js';
+export { cardSections } from './card-summary.js';
+export { type MappingTarget, cardMappingProblems, guessCardMapping } from './card-mapping.js';

@@ -9,7 +9,8 @@ export const cornersRequestSchema = z
   .strictObject({
     ...deviceSelection,
     ...bias,
-    w: quantity('w', 'm', { gt: 0, max: 0.1 }).describe('Drawn width W of the sized device, m'),
+    w: quantity('w', 'm', { gt: 0, max: 0.1 }).describe('Drawn width W of the sized device (all fingers), m'),
+    fingers: z.number({ error: 'fingers must be a whole number' }).int('fingers must be a whole number').min(1, 'fingers must be at least 1').max(100_000, 'fingers must be at most 100000').optional().describe('Fingers of the drawn width; 1 when absent (each finger loses ΔW)'),
     bias: z.enum(['current', 'voltage'], { error: 'bias must be "current" (hold ID) or "voltage" (hold VGS)' }),
     id: quantity('id', 'A', { gt: 0, max: 1 }).optional().describe('ID held at every corner (bias "current"), A'),
     vgs: quantity('vgs', 'V', { min: -20, max: 20 }).optional().describe('VGS held at every corner (bias "voltage"), V'),

@@ -17,6 +17,7 @@ export const computedWithSchema = z.object({
   processVersion: z.number().int().describe('The version number of the process profile the result was computed on'),
   processName: z.string().describe('The name of that process profile (another than the sheet\'s after a move)'),
   computedAt: z.string(),
+  tableSha256: z.string().nullable().optional().describe('Model table: the SHA-256 of the table the result was made from'),
 });
 export type ComputedWith = z.infer<typeof computedWithSchema>;
 
@@ -35,8 +36,11 @@ export const deviceComputeErrorSchema = z.object({
 });
 export type DeviceComputeError = z.infer<typeof deviceComputeErrorSchema>;
 
-export const STALE_REASONS = ['engine', 'process'] as const;
-export const staleReasonSchema = z.enum(STALE_REASONS).describe('engine: made by another ENGINE_VERSION; process: made on another process version than the sheet\'s');
+export const STALE_REASONS = ['engine', 'process', 'table'] as const;
+export const staleReasonSchema = z
+  .enum(STALE_REASONS)
+  .describe('engine: made by another ENGINE_VERSION; process: made on another process version than the sheet\'s; table: model table, made from another table than the version\'s current one for the device (or waiting for a table that now exists)');
+export type StaleReason = z.infer<typeof staleReasonSchema>;
 
 export const deviceSchema = z.object({
   id: z.string(),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { modelCardInputSchema, modelCardSummarySchema } from './model-card.js';
 import { processSchema } from './process.js';
 
 /**
@@ -77,20 +78,24 @@ export const processVersionSummarySchema = z.object({
   message: z.string(),
   author: userRefSchema.nullable(),
   createdAt: z.string(),
+  modelCardSha256: z.string().nullable().describe('SHA-256 of the version\'s model card; null when it has none'),
 });
 export type ProcessVersionSummary = z.infer<typeof processVersionSummarySchema>;
 
-export const processVersionSchema = processVersionSummarySchema.extend({ definition: processSchema });
+export const processVersionSchema = processVersionSummarySchema.extend({
+  definition: processSchema,
+  modelCard: modelCardSummarySchema.nullable().describe('The version\'s model card (its text: GET /api/processes/:id/model-card); null when it has none'),
+});
 export type ProcessVersion = z.infer<typeof processVersionSchema>;
 
 /** A profile with one of its versions in full (the latest unless another was asked for). */
 export const processProfileSchema = processProfileSummarySchema.extend({ version: processVersionSchema });
 export type ProcessProfile = z.infer<typeof processProfileSchema>;
 
-/** One difference between two versions, by dotted path: "nmos.kp", "corners.FF.pmos.dvt", "flavours.native.params.vt0". */
+/** One difference between two versions, by dotted path: "nmos.kp", "corners.FF.pmos.dvt", "flavours.native.params.vt0", "modelCard.sha256", "modelCard.corners.TT", "modelCard.devices.bfn18". */
 export const parameterChangeSchema = z.object({
   path: z.string(),
-  group: z.enum(['process', 'nmos', 'pmos', 'corners', 'flavours']),
+  group: z.enum(['process', 'nmos', 'pmos', 'corners', 'flavours', 'modelCard']),
   kind: z.enum(['changed', 'added', 'removed']),
   /** SI unit of the values ('' for plain numbers and text). */
   unit: z.string(),
@@ -113,6 +118,7 @@ export const createProcessRequestSchema = z.strictObject({
   nodeClass: nodeClassSchema.default(''),
   message: messageSchema.default(''),
   definition: processSchema,
+  modelCard: modelCardInputSchema.optional().describe('A SPICE model card for version 1 (a card of up to 2 MB: upload it with POST /api/processes/import, whose body limit is larger)'),
 });
 export type CreateProcessRequest = z.infer<typeof createProcessRequestSchema>;
 export type CreateProcessRequestInput = z.input<typeof createProcessRequestSchema>;
@@ -122,6 +128,7 @@ export const updateProcessRequestSchema = z.strictObject({
   nodeClass: nodeClassSchema.optional().describe('Unchanged when absent'),
   message: messageSchema.default(''),
   definition: processSchema,
+  modelCard: modelCardInputSchema.nullable().optional().describe('The new version\'s model card: absent keeps the base version\'s card (and mapping), null removes it'),
 });
 export type UpdateProcessRequest = z.infer<typeof updateProcessRequestSchema>;
 export type UpdateProcessRequestInput = z.input<typeof updateProcessRequestSchema>;

@@ -61,6 +61,26 @@ export const DEVICE_PARAMETERS = [
   p({ hardLimit: { min: 0, max: 1e-5, exclusiveMin: true }, name: 'wgrid', symbol: 'W grid', unit: 'm', displayUnit: 'nm', plausible: { min: 0.1e-9, max: 1e-6 }, description: 'Drawing grid the width of a finger snaps to' }),
   p({ hardLimit: { min: 0, max: 1e9 }, name: 'jg', symbol: 'JG', unit: 'A/m²', displayUnit: 'A/m²', plausible: { min: 0, max: 1e6 }, optional: true, description: 'Gate-leakage current density at vdd (gate current = jg·W·L); taken as given, no temperature law' }),
   p({ hardLimit: { min: 0, max: 1e6 }, name: 'js', symbol: 'JS', unit: 'A/m²', displayUnit: 'fA/µm²', plausible: { min: 0, max: 10 }, optional: true, description: 'Drain-junction leakage density at vdd (current = js·W·ldiff); taken as given, no temperature law' }),
+  // Short-channel terms of the all-region model (docs/model.md §6.3); each optional, absent = long channel.
+  p({ hardLimit: { min: -1e-6, max: 1e-6 }, name: 'dl', symbol: 'ΔL', unit: 'm', displayUnit: 'nm', plausible: { min: -50e-9, max: 100e-9 }, optional: true, description: 'Length reduction: Leff = L − ΔL (all-region model)' }),
+  p({ hardLimit: { min: -1e-6, max: 1e-6 }, name: 'dw', symbol: 'ΔW', unit: 'm', displayUnit: 'nm', plausible: { min: -50e-9, max: 100e-9 }, optional: true, description: 'Width reduction per finger: Weff = W − fingers·ΔW (all-region model)' }),
+  p({ hardLimit: { min: 0, max: 20 }, name: 'theta0', symbol: 'θ0', unit: '1/V', displayUnit: '1/V', plausible: { min: 0, max: 2 }, optional: true, description: 'Mobility degradation by the vertical field: ID ÷ (1 + θ·VOV), θ = θ0 + θ1/Leff' }),
+  p({ hardLimit: { min: 0, max: 1e-4 }, name: 'theta1', symbol: 'θ1', unit: 'm/V', displayUnit: 'µm/V', plausible: { min: 0, max: 1e-6 }, optional: true, description: 'Velocity saturation, θ1 ≈ 1/Esat: the part of θ that grows as 1/Leff; also lowers VDSsat' }),
+  p({ hardLimit: { min: 0, max: 100 }, name: 'theta2', symbol: 'θ2', unit: '1/V²', displayUnit: '1/V²', plausible: { min: 0, max: 5 }, optional: true, description: 'Quadratic mobility degradation: ID ÷ (1 + θ·VOV + θ2·VOV²)' }),
+  p({ hardLimit: { min: 0, max: 1 }, name: 'dibl', symbol: 'η', unit: 'V/V', displayUnit: 'mV/V', plausible: { min: 0, max: 0.2 }, optional: true, description: 'Drain-induced barrier lowering at L = lmin: VT falls by η·VDS' }),
+  p({ hardLimit: { min: 0, max: 10 }, name: 'diblExp', symbol: 'η exponent', unit: '', displayUnit: '', plausible: { min: 0.5, max: 4 }, optional: true, description: 'η(L) = dibl·((lmin − ΔL)/Leff)^diblExp; 2 when absent' }),
+  p({ hardLimit: { min: -0.5, max: 0.5 }, name: 'vtl', symbol: 'ΔVT(L)', unit: 'V', displayUnit: 'mV', plausible: { min: -0.15, max: 0.15 }, optional: true, description: 'Threshold change at L = lmin from the long-channel VT: < 0 roll-off, > 0 reverse short-channel effect' }),
+  p({ hardLimit: { min: 0, max: 10 }, name: 'vtlExp', symbol: 'ΔVT(L) exponent', unit: '', displayUnit: '', plausible: { min: 0.5, max: 4 }, optional: true, description: 'ΔVT(L) = vtl·((lmin − ΔL)/Leff)^vtlExp; 2 when absent' }),
+  p({ hardLimit: { min: -0.5, max: 2 }, name: 'nl', symbol: 'Δn(L)', unit: '', displayUnit: '', plausible: { min: 0, max: 0.5 }, optional: true, description: 'Rise of the slope factor at L = lmin over the long-channel n: Δn(L) = nl·((lmin − ΔL)/Leff)²' }),
+  p({ hardLimit: { min: 0, max: 1e-5 }, name: 'pclm', symbol: 'Pclm', unit: 'm', displayUnit: 'nm', plausible: { min: 0, max: 1e-6 }, optional: true, description: 'Channel-length modulation length: output conductance falls with Leff, VDS − VDSsat and the overdrive' }),
+  p({ hardLimit: { min: -1e-5, max: 1e-5 }, name: 'muExpL', symbol: 'µ exponent/L', unit: 'm', displayUnit: 'µm', plausible: { min: -1e-6, max: 1e-6 }, optional: true, description: 'Length dependence of the mobility temperature exponent: muExp + muExpL/Leff' }),
+  // Junction bias dependence and leakage terms.
+  p({ hardLimit: { min: 0.05, max: 2 }, name: 'pb', symbol: 'PB', unit: 'V', displayUnit: 'V', plausible: { min: 0.4, max: 1.2 }, optional: true, description: 'Junction built-in potential: C = C0/(1 + VR/PB)^M; 0.8 V when absent' }),
+  p({ hardLimit: { min: 0, max: 1 }, name: 'mj', symbol: 'MJ', unit: '', displayUnit: '', plausible: { min: 0.2, max: 0.6 }, optional: true, description: 'Grading coefficient of the junction area capacitance; 0.5 when absent' }),
+  p({ hardLimit: { min: 0, max: 1 }, name: 'mjsw', symbol: 'MJSW', unit: '', displayUnit: '', plausible: { min: 0.1, max: 0.5 }, optional: true, description: 'Grading coefficient of the junction sidewall capacitance; 0.33 when absent' }),
+  p({ hardLimit: { min: 0, max: 1 }, name: 'agidl', symbol: 'AGIDL', unit: 'S', displayUnit: 'nS', plausible: { min: 0, max: 1e-6 }, optional: true, description: 'Gate-induced drain leakage prefactor (BSIM form); no GIDL when absent' }),
+  p({ hardLimit: { min: 1e7, max: 1e11 }, name: 'bgidl', symbol: 'BGIDL', unit: 'V/m', displayUnit: 'V/m', plausible: { min: 1e8, max: 1e10 }, optional: true, description: 'GIDL field exponent; 2.3e9 V/m when absent' }),
+  p({ hardLimit: { min: -2, max: 5 }, name: 'egidl', symbol: 'EGIDL', unit: 'V', displayUnit: 'V', plausible: { min: 0, max: 2 }, optional: true, description: 'GIDL band-bending offset; 0.8 V when absent' }),
 ] as const satisfies readonly ParameterInfo[];
 
 /** Process-level fields and corner shifts, for the editor and the CSV import. */
@@ -125,10 +145,34 @@ export const deviceParamsSchema = z
     wgrid: device('wgrid'),
     jg: device('jg').optional(),
     js: device('js').optional(),
+    dl: device('dl').optional(),
+    dw: device('dw').optional(),
+    theta0: device('theta0').optional(),
+    theta1: device('theta1').optional(),
+    theta2: device('theta2').optional(),
+    dibl: device('dibl').optional(),
+    diblExp: device('diblExp').optional(),
+    vtl: device('vtl').optional(),
+    vtlExp: device('vtlExp').optional(),
+    nl: device('nl').optional(),
+    pclm: device('pclm').optional(),
+    muExpL: device('muExpL').optional(),
+    pb: device('pb').optional(),
+    mj: device('mj').optional(),
+    mjsw: device('mjsw').optional(),
+    agidl: device('agidl').optional(),
+    bgidl: device('bgidl').optional(),
+    egidl: device('egidl').optional(),
   })
   .superRefine((params, ctx) => {
     if (params.wgrid > params.wmin) {
       ctx.addIssue({ code: 'custom', path: ['wgrid'], message: `wgrid (${params.wgrid} m) must not exceed wmin (${params.wmin} m)` });
+    }
+    if (params.dl !== undefined && !(params.lmin - params.dl > 0)) {
+      ctx.addIssue({ code: 'custom', path: ['dl'], message: `ΔL (${params.dl} m) must be below lmin (${params.lmin} m): Leff = L − ΔL must stay positive` });
+    }
+    if (params.dw !== undefined && !(params.wmin - params.dw > 0)) {
+      ctx.addIssue({ code: 'custom', path: ['dw'], message: `ΔW (${params.dw} m) must be below wmin (${params.wmin} m): Weff must stay positive` });
     }
   })
   .describe('MOS parameters of one polarity at tnom; voltages polarity-normalised (PMOS: VSG, VSD, VBS, vt = −VTP)');

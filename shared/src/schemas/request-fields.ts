@@ -7,11 +7,21 @@ import { polaritySchema, processSchema } from './process.js';
  * SI number fields whose messages name the field, the device selection, the bias, the sizing targets.
  */
 
-export const MODELS = ['all-region', 'square-law'] as const;
+export const MODELS = ['all-region', 'square-law', 'table'] as const;
 export type Model = (typeof MODELS)[number];
+/** The two analytic models: long-channel, first-order estimates. */
+export const ANALYTIC_MODELS = ['all-region', 'square-law'] as const;
 export const modelSchema = z
-  .enum(MODELS, { error: 'model must be "all-region" or "square-law"' })
-  .describe('all-region: smooth ln²(1+eˣ) interpolation, valid from weak to strong inversion; square-law: SPICE level 1 plus an exponential tail');
+  .enum(MODELS, { error: 'model must be "all-region", "square-law" or "table"' })
+  .describe(
+    'all-region: long-channel analytic estimate, a smooth ln²(1+eˣ) interpolation from weak to strong inversion; square-law: long-channel first-order estimate, SPICE level 1 plus an exponential tail; table: interpolated in the tables characterised with ngspice from the process version\'s model card (short-channel effects included as far as the card models them)',
+  );
+/** How each model is named where a designer reads it: the analytic ones say they are long-channel estimates. */
+export const MODEL_LABELS: Record<Model, string> = {
+  'all-region': 'All-region (long-channel estimate)',
+  'square-law': 'Square law (first-order estimate)',
+  table: 'Tables from the model card',
+};
 
 /**
  * What a designer calls each number field, for messages: "L must be above 0 m", not "l must be above 0".

@@ -12,12 +12,14 @@ export type SweepParam = (typeof SWEEP_PARAMS)[number];
 /** Operating-point fields a sweep can return (the swept value always comes back under its own name). */
 export const SWEEP_FIELDS = [
   'w', 'l', 'wOverL', 'vgs', 'vds', 'vsb', 'temperature', 'vt', 'vov', 'n', 'vdsat', 'saturated',
-  'id', 'gm', 'gmb', 'gds', 'ro', 'gmId', 'intrinsicGain', 'ic', 'region', 'cgs', 'cgd', 'ft', 'sigmaVt', 'ioff',
+  'id', 'gm', 'gmb', 'gds', 'ro', 'gmId', 'intrinsicGain', 'ic', 'region', 'cgs', 'cgd', 'cgg', 'ft', 'sigmaVt', 'ioff',
 ] as const;
 export type SweepField = (typeof SWEEP_FIELDS)[number];
 
 export const MAX_SWEEP_POINTS = 10_000;
 export const MAX_SWEEP_SERIES = 50;
+/** Model "table" answers point by point (about 30 µs each): at most this many points over all series. */
+export const MAX_TABLE_SWEEP_POINTS = 20_000;
 
 const SWEEP_RANGES: Record<SweepParam, { unit: string; min: number; max: number; positive?: boolean }> = {
   vov: { unit: 'V', min: -2, max: 10 },
@@ -72,6 +74,9 @@ export const sweepRequestSchema = z
     const series = (value.corners?.length ?? 1) * (value.temperatures?.length ?? 1);
     if (series > MAX_SWEEP_SERIES) {
       ctx.addIssue({ code: 'custom', path: ['corners'], message: `At most ${MAX_SWEEP_SERIES} series (corners × temperatures), got ${series}` });
+    }
+    if (value.model === 'table' && series * value.sweep.points > MAX_TABLE_SWEEP_POINTS) {
+      ctx.addIssue({ code: 'custom', path: ['sweep', 'points'], message: `The table model sweeps at most ${MAX_TABLE_SWEEP_POINTS.toLocaleString('en')} points over all series (corners × temperatures × points), got ${(series * value.sweep.points).toLocaleString('en')}` });
     }
   })
   .describe('POST /api/compute/sweep: the device of a size request swept in one parameter, per corner × temperature');

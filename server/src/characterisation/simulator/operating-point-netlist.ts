@@ -4,7 +4,10 @@ import { SWEEP_OPTIONS } from './sweep-netlist.js';
 /** A sized device to simulate at one bias: polarity-normalised voltages (PMOS: VSG, VSD, VBS), SI units. */
 export interface DeviceToCheck {
   model: ModelStatement;
+  /** Drawn width, all fingers, m. */
   w: number;
+  /** Fingers of equal width in parallel (m=), each w/fingers wide; 1 when absent. */
+  fingers?: number;
   l: number;
   vgs: number;
   vds: number;
@@ -33,7 +36,7 @@ export function buildOperatingPointNetlist(devices: DeviceToCheck[], temperature
       `vg${k} g${k} 0 ${spiceNumber(sign * device.vgs)}`,
       `vd${k} d${k} 0 ${spiceNumber(sign * device.vds)}`,
       `vb${k} b${k} 0 ${spiceNumber(-sign * device.vsb)}`,
-      `m${k} d${k} g${k} 0 b${k} ${device.model.name} w=${spiceNumber(device.w)} l=${spiceNumber(device.l)}`,
+      `m${k} d${k} g${k} 0 b${k} ${device.model.name} w=${spiceNumber(device.w / (device.fingers ?? 1))} l=${spiceNumber(device.l)}${(device.fingers ?? 1) > 1 ? ` m=${device.fingers}` : ''}`,
     );
     vectors.push(`i(vd${k})`, `@m${k}[gm]`);
   });

@@ -1,20 +1,24 @@
-import { Injectable, PayloadTooLargeException, type CallHandler, type ExecutionContext, type NestInterceptor } from '@nestjs/common';
+import { Injectable, mixin, PayloadTooLargeException, type CallHandler, type NestInterceptor, type Type } from '@nestjs/common';
 import { catchError, type Observable, throwError } from 'rxjs';
 import { DomainError } from '../errors/domain-error.js';
 
-/** Every upload the product takes (a process file, a sheet CSV) is at most 1 MB. */
-export const UPLOAD_MAX_BYTES = 1024 * 1024;
-
-/** Wraps an upload: multer's "file too large" becomes 413 PAYLOAD_TOO_LARGE naming the field and the limit. */
-@Injectable()
-export class FileTooLargeInterceptor implements NestInterceptor {
-  intercept(_context: ExecutionContext, next: CallHandler): Observable<unknown> {
-    return next.handle().pipe(
-      catchError((error: unknown) =>
-        throwError(() =>
-          error instanceof PayloadTooLargeException ? new DomainError('PAYLOAD_TOO_LARGE', `The file is larger than ${UPLOAD_MAX_BYTES / 1024 / 1024} MB; nothing was stored`, 413, 'file') : error,
+/**
+ * Wraps an upload: multer's "file too large" becomes 413 PAYLOAD_TOO_LARGE naming the field, with `limits` saying
+ * what the route takes ("1 MB", "2 MB for a model card, 1 MB for a process file").
+ */
+export function fileTooLarge(limits: string): Type<NestInterceptor> {
+  @Injectable()
+  class FileTooLargeInterceptor implements NestInterceptor {
+    intercept(_context: unknown, next: CallHandler): Observable<unknown> {
+      return next.handle().pipe(
+        catchError((error: unknown) =>
+          throwError(() => (error instanceof PayloadTooLargeException ? new DomainError('PAYLOAD_TOO_LARGE', `The file is larger than ${limits}; nothing was stored`, 413, 'file') : error)),
         ),
-      ),
-    );
+      );
+    }
   }
+  return mixin(FileTooLargeInterceptor);
 }
+
+/** "1 MB" from a byte count. */
+export const megabytes = (bytes: number): string => `${bytes / 1024 / 1024} MB`;

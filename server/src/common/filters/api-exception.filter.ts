@@ -19,6 +19,9 @@ const CODE_BY_STATUS: Partial<Record<number, ErrorCode>> = {
   429: 'TOO_MANY_REQUESTS',
 };
 
+/** Engine refusals that are not a wrong input but a state of the stored data (the table model has no usable table yet): 409. */
+const ENGINE_CONFLICTS: ReadonlySet<ErrorCode> = new Set(['TABLE_NOT_READY', 'TABLE_NOT_CHARACTERISED', 'TABLE_CORRUPT']);
+
 const MESSAGE_BY_STATUS: Partial<Record<number, string>> = {
   401: 'Sign in to continue',
   413: 'The request body is larger than the server accepts',
@@ -43,7 +46,7 @@ export function toApiErrorBody(exception: unknown): ApiErrorBody {
     });
   }
   if (isEngineError(exception)) {
-    return withoutUndefined({ statusCode: 400, code: exception.code, message: exception.message, field: exception.field });
+    return withoutUndefined({ statusCode: ENGINE_CONFLICTS.has(exception.code) ? 409 : 400, code: exception.code, message: exception.message, field: exception.field });
   }
   if (exception instanceof ZodError) return toApiErrorBody(validationError(exception));
   if (exception instanceof HttpException) {

@@ -1,7 +1,7 @@
 import type { Problem } from '@channelwright/shared/schemas';
 import { importInvalid } from './import-problems.js';
 
-export type UploadKind = 'json' | 'csv';
+export type UploadKind = 'json' | 'csv' | 'card';
 
 export interface DecodedUpload {
   kind: UploadKind;
@@ -12,12 +12,17 @@ export interface DecodedUpload {
 
 const UTF8_BOM = [0xef, 0xbb, 0xbf];
 
+/** File names of SPICE model cards (common practice, no source). */
+const CARD_EXTENSIONS = ['.lib', '.l', '.mod', '.model', '.models', '.sp', '.spi', '.spice', '.cir', '.txt', '.mdl', '.inc'];
+
 /**
  * The uploaded bytes as text: UTF-8 only, without a byte-order mark (a mark is reported, and the rest
  * still read so the list of problems is complete). JSON when the name ends in .json or the text starts
- * with "{", CSV otherwise. An empty file, UTF-16 or bytes that are not UTF-8 refuse the file at once.
+ * with "{"; a model card when the name ends like one (.lib, .mod, .sp …) or its first line is a SPICE
+ * comment or dot-command; CSV otherwise (`kind` forces one). An empty file, UTF-16 or bytes that are not
+ * UTF-8 refuse the file at once.
  */
-export function decodeUpload(bytes: Uint8Array, fileName: string): DecodedUpload {
+export function decodeUpload(bytes: Uint8Array, fileName: string, kind?: UploadKind): DecodedUpload {
   const problems: Problem[] = [];
   let body = bytes;
   if (UTF8_BOM.every((byte, i) => bytes[i] === byte)) {
@@ -34,15 +39,18 @@ export function decodeUpload(bytes: Uint8Array, fileName: string): DecodedUpload
   try {
     text = new TextDecoder('utf-8', { fatal: true, ignoreBOM: true }).decode(body);
   } catch {
-    throw importInvalid([{ row: 1, field: 'file', message: 'The file is not UTF-8 text: save it as UTF-8 (CSV or JSON)' }]);
+    throw importInvalid([{ row: 1, field: 'file', message: 'The file is not UTF-8 text: save it as UTF-8 (CSV, JSON or a SPICE model card)' }]);
   }
   if (text.trim() === '') throw importInvalid([...problems, { row: 1, field: 'file', message: 'The file is empty' }]);
-  return { kind: kindOf(fileName, text), text, problems };
+  return { kind: kind ?? kindOf(fileName, text), text, problems };
 }
 
 function kindOf(fileName: string, text: string): UploadKind {
   const name = fileName.toLowerCase();
   if (name.endsWith('.json')) return 'json';
   if (name.endsWith('.csv')) return 'csv';
-  return text.trimStart().startsWith('{') ? 'json' : 'csv';
+  if (CARD_EXTENSIONS.some((extension) => name.endsWith(extension))) return 'card';
+  const start = text.trimStart();
+  if (start.startsWith('{')) return 'json';
+  return start.startsWith('*') || start.startsWith('.') ? 'card' : 'csv';
 }

@@ -1,6 +1,6 @@
-import { processFileSchema, type Problem, type Process } from '@channelwright/shared/schemas';
+import { type ModelCardInput, processFileSchema, type Problem, type Process } from '@channelwright/shared/schemas';
 
-export type ProcessFileReading = { ok: true; definition: Process; nodeClass?: string } | { ok: false; problems: Problem[] };
+export type ProcessFileReading = { ok: true; definition: Process; nodeClass?: string; modelCard?: ModelCardInput } | { ok: false; problems: Problem[] };
 
 /**
  * Reads our JSON process file (processFileSchema: format, schemaVersion, process). Numbers are plain
@@ -24,7 +24,7 @@ export function readProcessJson(text: string): ProcessFileReading {
       })),
     };
   }
-  return { ok: true, definition: parsed.data.process, nodeClass: parsed.data.nodeClass };
+  return { ok: true, definition: parsed.data.process, nodeClass: parsed.data.nodeClass, modelCard: parsed.data.modelCard };
 }
 
 /** V8 says "… at position 58" or "… (line 3 column 5)"; the row is the line, 1 when it says neither. */

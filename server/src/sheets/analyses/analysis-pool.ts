@@ -1,4 +1,4 @@
-import { cornerMatrixRows, sheetLeakage, type LeakageDevice, type MatrixDevice, type MatrixRowCells } from '@channelwright/shared/device';
+import { cornerMatrixRows, sheetLeakage, type CornersCall, type LeakageDevice, type MatrixDevice, type MatrixRowCells } from '@channelwright/shared/device';
 import type { LeakageBudget, MatrixColumn, Process, SheetLeakage } from '@channelwright/shared/schemas';
 import { Injectable, type OnModuleDestroy } from '@nestjs/common';
 import { existsSync } from 'node:fs';
@@ -15,6 +15,8 @@ export interface MatrixJob {
   devices: MatrixDevice[];
   bias: 'current' | 'voltage';
   columns: MatrixColumn[];
+  /** The engine call with the devices' stored tables bound (table model); such a job runs inline, as a function cannot go to a worker. */
+  corners?: CornersCall;
 }
 
 export interface LeakageJob {
@@ -23,6 +25,8 @@ export interface LeakageJob {
   devices: LeakageDevice[];
   budget: LeakageBudget | null;
   engineVersion: string;
+  /** As MatrixJob.corners. */
+  corners?: CornersCall;
 }
 
 /** About this many operating points per device of a leakage budget (the temperatures at the fast corner, every corner at the budget's). */
@@ -49,13 +53,13 @@ export class AnalysisPool implements OnModuleDestroy {
   private pool: Piscina | null = null;
 
   async matrixRows(job: MatrixJob): Promise<MatrixRowCells[]> {
-    if (job.devices.length * job.columns.length <= INLINE_POINTS) return cornerMatrixRows(job.process, job.processId, job.devices, job.bias, job.columns);
+    if (job.corners || job.devices.length * job.columns.length <= INLINE_POINTS) return cornerMatrixRows(job.process, job.processId, job.devices, job.bias, job.columns, job.corners);
     const answers = await Promise.all(this.chunks(job.devices).map((devices) => this.run<MatrixRowCells[]>('matrixRows', { ...job, devices })));
     return answers.flat();
   }
 
   async leakage(job: LeakageJob): Promise<SheetLeakage> {
-    if (job.devices.length * LEAKAGE_POINTS_PER_DEVICE <= INLINE_POINTS) return sheetLeakage(job.process, job.processId, job.devices, job.budget, job.engineVersion);
+    if (job.corners || job.devices.length * LEAKAGE_POINTS_PER_DEVICE <= INLINE_POINTS) return sheetLeakage(job.process, job.processId, job.devices, job.budget, job.engineVersion, job.corners);
     return this.run<SheetLeakage>('leakage', job);
   }
 

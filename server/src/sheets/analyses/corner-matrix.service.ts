@@ -2,6 +2,7 @@ import { cornerShiftOf, ENGINE_VERSION, matrixColumns, type MatrixDevice } from 
 import type { MatrixRow, SheetCornersRequest, SheetCornersResponse } from '@channelwright/shared/schemas';
 import { Injectable } from '@nestjs/common';
 import { SheetReader } from '../sheet-reader.js';
+import { SheetTables } from '../sheet-tables.js';
 import { AnalysisPool } from './analysis-pool.js';
 import { sizedDevicesOf } from './sized-devices.js';
 
@@ -11,6 +12,7 @@ export class CornerMatrixService {
   constructor(
     private readonly reader: SheetReader,
     private readonly pool: AnalysisPool,
+    private readonly tables: SheetTables,
   ) {}
 
   async matrix(sheetId: string, request: SheetCornersRequest): Promise<SheetCornersResponse> {
@@ -20,7 +22,8 @@ export class CornerMatrixService {
     const columns = matrixColumns(process, request);
     const { sized, skipped } = sizedDevicesOf(loaded, request.deviceIds);
     const devices: MatrixDevice[] = sized.map(({ device, size }) => ({ ...size, limits: device.targets.limits ?? [] }));
-    const cells = await this.pool.matrixRows({ process, processId: loaded.process.profileId, devices, bias: request.bias, columns });
+    const corners = await this.tables.cornersCallFor(loaded.sheet, devices);
+    const cells = await this.pool.matrixRows({ process, processId: loaded.process.profileId, devices, bias: request.bias, columns, corners });
     const rows: MatrixRow[] = sized.map(({ device, size }, index) => ({
       deviceId: device.id,
       name: device.targets.name,

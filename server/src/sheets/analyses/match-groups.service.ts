@@ -1,4 +1,4 @@
-import { deviceParamsOf, resizeMatchGroup, type MemberSize, type ResizeMember } from '@channelwright/shared/device';
+import { deviceParamsOf, resizeMatchGroup, type MemberSize, type ResizeMember, type TableSource } from '@channelwright/shared/device';
 import type { DeviceTargets, MatchGroupResize, MatchGroupResizeRequest } from '@channelwright/shared/schemas';
 import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
@@ -11,7 +11,8 @@ import { computationColumns, computeDevice } from '../device-computation.js';
 import { DeviceEntity } from '../device.entity.js';
 import { offsetBudgetsOf } from '../sheet-budgets.js';
 import { SheetReader } from '../sheet-reader.js';
-import type { LoadedSheet } from '../sheet-response.js';
+import { targetsOf, type LoadedSheet } from '../sheet-response.js';
+import { SheetTables } from '../sheet-tables.js';
 import { sizedDevicesOf, type SizedSheetDevice } from './sized-devices.js';
 
 type Keep = 'gmId' | 'vov';
@@ -39,20 +40,25 @@ export class MatchGroupsService {
     private readonly unitOfWork: UnitOfWork,
     private readonly reader: SheetReader,
     private readonly audit: AuditService,
+    private readonly tables: SheetTables,
   ) {}
 
   async resize(sheetId: string, request: MatchGroupResizeRequest): Promise<MatchGroupResize> {
-    if (!request.apply) return this.plan(await this.reader.load(sheetId), request).answer;
+    if (!request.apply) {
+      const loaded = await this.reader.load(sheetId);
+      return this.plan(loaded, request, await this.tables.sourceFor(loaded.sheet, loaded.devices.map(targetsOf))).answer;
+    }
     return this.unitOfWork.run(async (manager) => {
       const loaded = await this.reader.load(sheetId, manager);
-      const { answer, members } = this.plan(loaded, request);
+      const tables = await this.tables.sourceFor(loaded.sheet, loaded.devices.map(targetsOf), manager);
+      const { answer, members } = this.plan(loaded, request, tables);
       for (const member of answer.members) assertVersion('device', { version: member.version }, request.versions?.[member.deviceId] ?? -1);
-      await this.write(manager, loaded, members, answer);
+      await this.write(manager, loaded, members, answer, tables);
       return { ...answer, applied: true };
     });
   }
 
-  private plan(loaded: LoadedSheet, request: MatchGroupResizeRequest): { answer: MatchGroupResize; members: SizedSheetDevice[] } {
+  private plan(loaded: LoadedSheet, request: MatchGroupResizeRequest, tables: TableSource | undefined): { answer: MatchGroupResize; members: SizedSheetDevice[] } {
     const inGroup = loaded.devices.filter((device) => (JSON.parse(device.targets) as DeviceTargets).matchGroup === request.group);
     if (inGroup.length === 0) throw new DomainError('MATCH_GROUP_NOT_FOUND', `This sheet has no match group "${request.group}"`, 404, 'group');
     const { sized, skipped } = sizedDevicesOf(loaded, inGroup.map((d) => d.id));
@@ -68,7 +74,7 @@ export class MatchGroupsService {
       return { w: size.w, l: size.l, multiplier: size.multiplier, gmId: device.result.gmId, vov: device.result.vov, fingers: device.result.fingers, avt: params.avt, abeta: params.abeta, lmin: params.lmin, grid: params.wgrid };
     });
     const plan = resizeMatchGroup(resizeMembers, target, (index, l) => {
-      const computation = computeDevice(targetsAt(sized[index], l), loaded.sheet, loaded.process);
+      const computation = computeDevice(targetsAt(sized[index], l), loaded.sheet, loaded.process, tables);
       if (!computation.result) return computation.error?.message ?? 'The engine gave no result';
       const { w, gmId, vov, fingers } = computation.result;
       return { w, l: computation.result.l, gmId, vov, fingers } satisfies MemberSize;
@@ -96,13 +102,13 @@ export class MatchGroupsService {
     return { answer, members: sized };
   }
 
-  private async write(manager: EntityManager, loaded: LoadedSheet, members: SizedSheetDevice[], answer: MatchGroupResize): Promise<void> {
+  private async write(manager: EntityManager, loaded: LoadedSheet, members: SizedSheetDevice[], answer: MatchGroupResize, tables: TableSource | undefined): Promise<void> {
     const repository = manager.getRepository(DeviceEntity);
     for (const [index, member] of members.entries()) {
       const entity = loaded.devices.find((d) => d.id === member.device.id);
       if (!entity) throw notFound('DEVICE_NOT_FOUND', 'This sheet has no device with this id');
       const targets = targetsAt(member, answer.members[index].to.l);
-      const computation = computeDevice(targets, loaded.sheet, loaded.process);
+      const computation = computeDevice(targets, loaded.sheet, loaded.process, tables);
       await repository.save(Object.assign(entity, { targets: JSON.stringify(targets), ...computationColumns(computation), version: entity.version + 1 }));
       await this.audit.record(manager, deviceAudit('device.updated', loaded.sheet, entity, member.device.targets, targets));
     }

@@ -1,7 +1,7 @@
 import type { SizedDevice } from '@channelwright/shared/device';
 import type { DeviceResult, DeviceTargets } from '@channelwright/shared/schemas';
 import { DomainError } from '../../common/errors/domain-error.js';
-import { resultOf, targetsOf, type LoadedSheet } from '../sheet-response.js';
+import { errorOf, resultOf, targetsOf, type LoadedSheet } from '../sheet-response.js';
 
 /** A sheet device with a stored result: what the analyses check, sized and drawn as it was stored. */
 export interface SizedSheetDevice {
@@ -24,7 +24,8 @@ export function sizedDevicesOf(loaded: LoadedSheet, ids?: readonly string[]): { 
     const targets = targetsOf(entity);
     const result = resultOf(entity);
     if (!result) {
-      skipped.push({ deviceId: entity.id, name: targets.name, reason: 'Not sized: the engine gave no result for its targets' });
+      // A device waiting for its table says so (the engine's TABLE_NOT_READY / TABLE_NOT_CHARACTERISED message).
+      skipped.push({ deviceId: entity.id, name: targets.name, reason: `Not sized: ${errorOf(entity)?.message ?? 'the engine gave no result for its targets'}` });
       continue;
     }
     sized.push({

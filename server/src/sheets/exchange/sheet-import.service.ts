@@ -1,3 +1,4 @@
+import type { TableSource } from '@channelwright/shared/device';
 import { readSheetCsv, type SheetCsvReading } from '@channelwright/shared/formats';
 import { SHEET_CSV_COLUMNS, sheetCsvTitle, type DeviceTargets, type Problem, type SheetImportFields, type SheetImportResult } from '@channelwright/shared/schemas';
 import { Injectable } from '@nestjs/common';
@@ -8,6 +9,7 @@ import { UnitOfWork } from '../../database/unit-of-work.js';
 import { importInvalid } from '../../processes/import/import-problems.js';
 import { computationColumns, computeDevice, isBadReference, type DeviceComputation } from '../device-computation.js';
 import { DeviceEntity } from '../device.entity.js';
+import { SheetTables } from '../sheet-tables.js';
 import { SheetReader } from '../sheet-reader.js';
 import { targetsOf, type LoadedSheet } from '../sheet-response.js';
 import { decodeCsvUpload } from './decode-csv-upload.js';
@@ -39,21 +41,30 @@ export class SheetImportService {
     private readonly unitOfWork: UnitOfWork,
     private readonly reader: SheetReader,
     private readonly audit: AuditService,
+    private readonly tables: SheetTables,
   ) {}
 
   async import(sheetId: string, bytes: Uint8Array, fields: SheetImportFields): Promise<SheetImportResult> {
     const reading = readSheetCsv(decodeCsvUpload(bytes));
-    if (fields.mode === 'preview') return this.answer(reading, this.plan(await this.reader.load(sheetId), reading), 'preview', false);
+    if (fields.mode === 'preview') {
+      const loaded = await this.reader.load(sheetId);
+      return this.answer(reading, this.plan(loaded, reading, await this.tablesFor(loaded, reading)), 'preview', false);
+    }
     return this.unitOfWork.run(async (manager) => {
       const loaded = await this.reader.load(sheetId, manager);
-      const planned = this.plan(loaded, reading);
+      const planned = this.plan(loaded, reading, await this.tablesFor(loaded, reading, manager));
       if (planned.problems.length > 0 && !fields.onlyValid) throw importInvalid(planned.problems);
       await this.write(manager, loaded, planned.rows, reading);
       return this.answer(reading, planned, 'apply', planned.rows.length > 0);
     });
   }
 
-  private plan(loaded: LoadedSheet, reading: SheetCsvReading): { rows: PlannedRow[]; problems: Problem[] } {
+  /** The stored tables of the rows that use the table model (they are sized as the sheet's own devices are). */
+  private tablesFor(loaded: LoadedSheet, reading: SheetCsvReading, manager?: EntityManager): Promise<TableSource | undefined> {
+    return this.tables.sourceFor(loaded.sheet, reading.rows.map((r) => r.targets), manager);
+  }
+
+  private plan(loaded: LoadedSheet, reading: SheetCsvReading, tables: TableSource | undefined): { rows: PlannedRow[]; problems: Problem[] } {
     const problems: Problem[] = [...reading.problems];
     const rows: PlannedRow[] = [];
     for (const { row, targets: read } of reading.rows) {
@@ -63,7 +74,7 @@ export class SheetImportService {
         problems.push({ row, field: 'Name', message: targets });
         continue;
       }
-      const computation = computeDevice(targets, loaded.sheet, loaded.process);
+      const computation = computeDevice(targets, loaded.sheet, loaded.process, tables);
       if (isBadReference(computation)) {
         problems.push({ row, field: titleOfField(computation.error?.field), message: computation.error?.message ?? 'Not known to the sheet\'s process' });
         continue;

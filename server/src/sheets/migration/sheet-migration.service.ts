@@ -1,4 +1,4 @@
-import { migrateTargets, type MigratedTargets } from '@channelwright/shared/device';
+import { migrateTargets, type MigratedTargets, type TableSource } from '@channelwright/shared/device';
 import { cornerNames, type DeviceResult, type DeviceTargets, type MigrateSheetRequest, type MigrationFigures, type SheetMigration } from '@channelwright/shared/schemas';
 import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
@@ -9,6 +9,7 @@ import type { ProcessViewer } from '../../processes/process-visibility.js';
 import { ProcessesService, type ResolvedProcess } from '../../processes/processes.service.js';
 import { computationColumns, computeDevice, type DeviceComputation } from '../device-computation.js';
 import { DeviceEntity } from '../device.entity.js';
+import { SheetTables } from '../sheet-tables.js';
 import { SheetReader } from '../sheet-reader.js';
 import { resultOf, targetsOf, toSheetSummary, type LoadedSheet } from '../sheet-response.js';
 import { SheetEntity } from '../sheet.entity.js';
@@ -49,13 +50,17 @@ export class SheetMigrationService {
     private readonly reader: SheetReader,
     private readonly processes: ProcessesService,
     private readonly audit: AuditService,
+    private readonly tables: SheetTables,
   ) {}
 
   async migrate(sheetId: string, request: MigrateSheetRequest, editor: ProcessViewer): Promise<SheetMigration> {
     return this.unitOfWork.run(async (manager) => {
       const source = await this.reader.load(sheetId, manager);
       const target = await this.processes.resolveDefinition(request.processId, request.processVersion, manager, editor);
-      const planned = this.plan(source, target, request);
+      // Table-model devices are sized from the target version's own tables (or wait for them, saying so).
+      const defaults = this.defaultsOn(source, target);
+      const tables = await this.tables.sourceFor({ model: defaults.model, processVersionId: target.versionId }, source.devices.map(targetsOf), manager);
+      const planned = this.plan(source, target, request, tables);
       if (request.preview) return planned.answer;
       const summary = await this.write(manager, source, target, request, planned);
       return { ...planned.answer, sheet: summary };
@@ -67,14 +72,14 @@ export class SheetMigrationService {
     return { temperature: sheet.temperature, corner: cornerNames(target.definition).includes(sheet.corner) ? sheet.corner : 'TT', model: sheet.model };
   }
 
-  private plan(source: LoadedSheet, target: ResolvedProcess, request: MigrateSheetRequest): { answer: SheetMigration; rows: MigratedRow[]; defaults: SheetDefaults } {
+  private plan(source: LoadedSheet, target: ResolvedProcess, request: MigrateSheetRequest, tables: TableSource | undefined): { answer: SheetMigration; rows: MigratedRow[]; defaults: SheetDefaults } {
     const from = source.process.definition;
     const to = target.definition;
     const defaults = this.defaultsOn(source, target);
     const rows = source.devices.map((device): MigratedRow => {
       const targets = targetsOf(device);
       const moved = migrateTargets(targets, from, to, { fixedLength: request.fixedLengths.includes(device.id), scaleVoltages: request.scaleVoltages, currentScale: request.currentScale });
-      const computation = computeDevice(moved.targets, defaults, target);
+      const computation = computeDevice(moved.targets, defaults, target, tables);
       return { device, targets, moved, computation };
     });
     const answer: SheetMigration = {

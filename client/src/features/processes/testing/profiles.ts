@@ -23,11 +23,11 @@ export function profileOf(id: string, definition: Process, options: { version?: 
     updatedAt: '2026-11-20T09:30:00.000Z',
     updatedBy: by,
   };
-  return { ...summary, version: { ...versionOf(id, options.version ?? latest), definition } };
+  return { ...summary, version: { ...versionOf(id, options.version ?? latest), definition, modelCard: null } };
 }
 
 export function versionOf(profileId: string, number: number, message = `version ${number}`): ProcessVersionSummary {
-  return { id: `${profileId}-v${number}`, number, message, author: by, createdAt: `2026-11-${String(number + 1).padStart(2, '0')}T09:00:00.000Z` };
+  return { id: `${profileId}-v${number}`, number, message, author: by, createdAt: `2026-11-${String(number + 1).padStart(2, '0')}T09:00:00.000Z`, modelCardSha256: null };
 }
 
 export const bf180 = () => profileOf('p-bf180', structuredClone(BF180G));

@@ -1,4 +1,4 @@
-import { MODELS, type Sheet } from '@channelwright/shared/schemas';
+import { MODEL_LABELS, MODELS, type Sheet } from '@channelwright/shared/schemas';
 import { Alert, Button, Divider, Group, Modal, Select, SimpleGrid, Stack, Text, TextInput, Textarea, Title } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { notifications } from '@mantine/notifications';
@@ -77,7 +77,7 @@ export function SheetSettingsDialog({ sheet, opened, onClose }: { sheet: Sheet; 
           <Select label="Version" size="xs" data={versions} value={values.processVersion} onChange={(v) => v && form.setFieldValue('processVersion', v)} allowDeselect={false} error={errors.processVersion} />
           <Select label="Default corner" size="xs" data={corners} value={values.corner} onChange={(v) => v && form.setFieldValue('corner', v)} allowDeselect={false} error={errors.corner} />
           <QuantityInput label="Default temperature" unit="°C" size="xs" placeholder={`tnom (${sheet.process.tnom})`} value={values.temperature} onChange={(t) => form.setFieldValue('temperature', t)} error={errors.temperature} />
-          <Select label="Default model" size="xs" data={MODELS.map((m) => ({ value: m, label: m }))} value={values.model} onChange={(v) => v && form.setFieldValue('model', v as SettingsValues['model'])} allowDeselect={false} />
+          <Select label="Default model" size="xs" data={MODELS.map((m) => ({ value: m, label: MODEL_LABELS[m] }))} value={values.model} onChange={(v) => v && form.setFieldValue('model', v as SettingsValues['model'])} allowDeselect={false} />
         </SimpleGrid>
         {values.processId !== sheet.process.profileId || values.processVersion !== String(sheet.process.version) ? (
           <Text size="xs" c="oxide">Every stored result stays until you recompute; the sheet lists the devices that are then stale.</Text>
