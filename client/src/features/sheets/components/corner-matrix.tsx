@@ -4,9 +4,10 @@ import { Alert, Anchor, Group, Loader, Paper, SegmentedControl, Select, Skeleton
 import { Fragment, useMemo, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { useSheetCorners } from '../api/sheet-corners';
-import { columnText, figureLabel, limitText } from '../model/matrix-figures';
+import { columnText, figureLabel, limitText, temperatureText } from '../model/matrix-figures';
 import { MatrixCell } from './matrix-cell';
 import { MatrixLegend } from './matrix-legend';
+import { SkippedDevices } from './skipped-devices';
 
 interface CornerMatrixProps {
   sheetId: string;
@@ -71,6 +72,15 @@ export function CornerMatrix({ sheetId, deviceIds, deviceHref }: CornerMatrixPro
   const corners = [...new Set(columns.map((c) => c.corner))];
   const perCorner = columns.length / corners.length;
 
+  if (rows.length === 0) {
+    return (
+      <Stack gap="sm">
+        {controls}
+        {skipped.length > 0 ? <SkippedDevices skipped={skipped} nothingChecked what="the matrix" /> : <Text size="sm" c="dimmed">No devices on this sheet yet.</Text>}
+      </Stack>
+    );
+  }
+
   return (
     <Stack gap="sm">
       {controls}
@@ -80,17 +90,17 @@ export function CornerMatrix({ sheetId, deviceIds, deviceHref }: CornerMatrixPro
             <Table.Thead>
               <Table.Tr>
                 <Table.Th rowSpan={withSupply ? 3 : 2}>Device</Table.Th>
+                <Table.Th rowSpan={withSupply ? 3 : 2}>Worst</Table.Th>
                 {corners.map((corner) => (
                   <Table.Th key={corner} colSpan={perCorner} ta="center" style={{ borderLeft: '1px solid var(--mantine-color-default-border)' }}>
                     {corner}
                   </Table.Th>
                 ))}
-                <Table.Th rowSpan={withSupply ? 3 : 2}>Worst</Table.Th>
               </Table.Tr>
               <Table.Tr>
                 {columns.filter((_, i) => i % span === 0).map((column, i) => (
                   <Table.Th key={`${column.corner}-${column.temperature}`} colSpan={span} ta="right" style={i % (perCorner / span) === 0 ? { borderLeft: '1px solid var(--mantine-color-default-border)' } : undefined}>
-                    {column.temperature} °C
+                    {temperatureText(column.temperature)}
                   </Table.Th>
                 ))}
               </Table.Tr>
@@ -113,14 +123,15 @@ export function CornerMatrix({ sheetId, deviceIds, deviceHref }: CornerMatrixPro
                         <Text key={limit.figure} size="xs" c="dimmed" fw={400}>{limitText(limit, row.polarity)}</Text>
                       ))}
                     </Table.Th>
+                    {/* Beside the name, so a wide matrix still shows where each row is worst without scrolling. */}
+                    <Table.Td style={{ whiteSpace: 'nowrap' }} aria-label={`Worst cell of ${row.name}`}>
+                      {worst ? columnText(columns[worst.column], withSupply) : '—'}
+                    </Table.Td>
                     {row.cells.map((cell, index) => (
                       <Fragment key={index}>
                         <MatrixCell cell={cell} figure={shown} where={`${row.name} at ${columnText(columns[index], withSupply)}`} worst={worst?.column === index} groupStart={index % perCorner === 0} />
                       </Fragment>
                     ))}
-                    <Table.Td style={{ whiteSpace: 'nowrap' }} aria-label={`Worst cell of ${row.name}`}>
-                      {worst ? columnText(columns[worst.column], withSupply) : '—'}
-                    </Table.Td>
                   </Table.Tr>
                 );
               })}
@@ -133,11 +144,7 @@ export function CornerMatrix({ sheetId, deviceIds, deviceHref }: CornerMatrixPro
         {bias === 'current' ? 'ID held at the stored result, VGS solved at each point (as in a mirror).' : 'VGS held at the stored result, ID follows.'} W and L as drawn; each device keeps its {figureLabel('headroom').split(' ')[0]}.{' '}
         {withSupply ? 'The supply sets the gate-drive ceiling and the off-state VDS. ' : ''}First-order estimates: verify with the foundry&apos;s models and sign-off simulation.
       </Text>
-      {skipped.length > 0 && (
-        <Text size="xs" c="dimmed">
-          Not in the matrix (no result to check): {skipped.map((s) => s.name).join(', ')}.
-        </Text>
-      )}
+      <SkippedDevices skipped={skipped} nothingChecked={false} what="the matrix" />
     </Stack>
   );
 }

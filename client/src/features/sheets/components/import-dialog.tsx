@@ -81,7 +81,7 @@ export function ImportDialog({ sheetId, opened, onClose }: { sheetId: string; op
         <Group justify="flex-end" gap="xs">
           <Button variant="default" size="xs" onClick={close}>Cancel</Button>
           {preview && preview.problems.length > 0 && good > 0 && (
-            <Button variant="light" size="xs" loading={importer.isPending} onClick={() => apply(true)}>Apply the {good} good rows only</Button>
+            <Button variant="light" size="xs" loading={importer.isPending} onClick={() => apply(true)}>{good === 1 ? 'Apply the good row only' : `Apply the ${good} good rows only`}</Button>
           )}
           <Button size="xs" disabled={!preview || preview.problems.length > 0 || good === 0} loading={importer.isPending && Boolean(preview)} onClick={() => apply(false)}>
             Apply

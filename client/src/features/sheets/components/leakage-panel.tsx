@@ -4,6 +4,7 @@ import { Quantity } from '../../../components/quantity';
 import { RegionErrorBoundary } from '../../../components/region-error-boundary';
 import { useSheetLeakage } from '../api/sheet-leakage';
 import { LeakageChart } from './leakage-chart';
+import { SkippedDevices } from './skipped-devices';
 
 /** The leakage budget: the worst corner's total against the budget, the chart over temperature, and each device's terms. */
 export function LeakagePanel({ sheetId }: { sheetId: string }) {
@@ -12,6 +13,8 @@ export function LeakagePanel({ sheetId }: { sheetId: string }) {
   if (leakage.isError) return <Alert color="red" variant="light" title="The leakage could not be computed" role="alert">{leakage.error.message}</Alert>;
   const data = leakage.data;
   const at = data.temperatures.indexOf(data.budgetTemperature);
+  // Nothing sized yet (tables still being characterised …): say why, rather than a total of 0 A and an empty chart.
+  if (data.devices.length === 0 && data.conducting.length === 0) return <SkippedDevices skipped={data.skipped} nothingChecked what="the leakage budget" />;
   return (
     <Stack gap="sm">
       <Group gap="sm" wrap="wrap">
@@ -70,7 +73,7 @@ export function LeakagePanel({ sheetId }: { sheetId: string }) {
           {data.conducting.map((d) => <Quantity key={d.deviceId} value={d.current} unit="A" />)} at {data.fastCorner}, hottest).
         </Text>
       )}
-      {data.skipped.length > 0 && <Text size="xs" c="dimmed">Not counted: {data.skipped.map((s) => `${s.name} (${s.reason})`).join('; ')}.</Text>}
+      <SkippedDevices skipped={data.skipped} nothingChecked={false} what="the total" />
     </Stack>
   );
 }

@@ -22,8 +22,10 @@ export function limitText(limit: DeviceLimit, polarity: Polarity = 'nmos'): stri
   return limit.min !== undefined ? `${label} ≥ ${value(limit.min)}` : `${label} ≤ ${value(limit.max as number)}`;
 }
 
+/** A temperature with a true minus sign: "−40 °C". */
+export const temperatureText = (celsius: number): string => `${celsius < 0 ? '−' : ''}${Math.abs(celsius)} °C`;
+
 /** Where a column sits: "SS, −40 °C" and, with a supply step, "VDD 1.62 V". */
 export function columnText(column: MatrixColumn, withSupply: boolean): string {
-  const temperature = `${column.temperature < 0 ? '−' : ''}${Math.abs(column.temperature)} °C`;
-  return `${column.corner}, ${temperature}${withSupply ? `, VDD ${formatQuantity(column.vdd, 'V', { digits: 3 })}` : ''}`;
+  return `${column.corner}, ${temperatureText(column.temperature)}${withSupply ? `, VDD ${formatQuantity(column.vdd, 'V', { digits: 3 })}` : ''}`;
 }
