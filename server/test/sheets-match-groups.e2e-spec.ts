@@ -25,7 +25,10 @@ describe('POST /api/sheets/:id/match-groups/resize', () => {
     expect(plan.keep).toBe('gmId');
     expect(plan.applied).toBe(false);
     expect(plan.after.sigmaVos).toBeLessThanOrEqual(2e-3);
-    expect(plan.after.sigmaVos).toBeGreaterThan(0.99 * 2e-3);
+    // The 2.0 model sizes the pair wider than 2 mV needs (1.63 mV), so the plan shrinks it; on the width grid and
+    // with gm/ID drifting with L (n(L), λ(L)) it lands within 2 % under the target.
+    expect(plan.before.sigmaVos).toBeLessThan(2e-3);
+    expect(plan.after.sigmaVos).toBeGreaterThan(0.98 * 2e-3);
     // The same group sized by hand with the engine at the plan's length gives the plan's offset (Pelgrom 1989, Kinget 2005).
     const sized = plan.members.map((m) => computeSize({ processId: 'bf180g', polarity: 'pmos', id: 10e-6, l: m.to.l, vds: 0.6, gmId: 16 }, BF180G));
     const { avt, abeta } = BF180G.pmos;

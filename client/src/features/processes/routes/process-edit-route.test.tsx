@@ -34,7 +34,7 @@ async function openEditor() {
 }
 
 // The editor renders some sixty fields; jsdom on a busy two-core machine needs more than the default 5 s for some tests.
-describe('the process editor', { timeout: 20_000 }, () => {
+describe('the process editor', { timeout: 60_000 }, () => {
   it('starts from the stored numbers, each in its display unit', async () => {
     fakeLibrary();
     const { nmos } = await openEditor();
