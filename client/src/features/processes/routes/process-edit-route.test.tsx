@@ -15,7 +15,7 @@ const DERIVED = {
   constants: [{ symbol: 'ni(300 K)', name: 'intrinsic carrier density', value: 1e16, unit: 'm⁻³', source: 'Sproul & Green 1991' }],
 };
 
-function fakeLibrary(onPut: (body: UpdateProcessRequest) => FakeResponse = (body) => ({ body: { ...bf180(), latestVersion: 2, version: { ...versionOf('p-bf180', 2), definition: body.definition } } })) {
+function fakeLibrary(onPut: (body: UpdateProcessRequest) => FakeResponse = (body) => ({ body: { ...bf180(), latestVersion: 2, version: { ...versionOf('p-bf180', 2), definition: body.definition, modelCard: null } } })) {
   return installFakeApi({
     'GET /api/config': { body: demoConfig },
     'GET /api/auth/me': { body: admin },
