@@ -3,66 +3,12 @@ import { parseQuantity } from '@channelwright/shared/units';
 import { readFile, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import Papa from 'papaparse';
-import type { Locator, Page } from 'playwright-core';
 import { expect, it } from 'vitest';
 import { DEMO_USERS } from './harness/demo-accounts';
 import { describeJourney } from './harness/journey';
 import { SCREENSHOT_DIR } from './harness/paths';
-import { saveScreenshot } from './harness/screenshots';
+import { field, openSheet, PROJECT, quantityIn, resultCell, resultsSettled, SHEET, sheetCell, shoot } from './harness/sheet-pages';
 import { signIn } from './harness/sign-in';
-
-// The invented demo data the server seeds: the Wrenmoss project and its two-stage amplifier sheet.
-const PROJECT = 'Wrenmoss sensor front end';
-const SHEET = 'Two-stage amplifier';
-
-/** Full-page pictures start at the top, so the fixed header stays where it belongs. */
-async function shoot(page: Page, name: string): Promise<void> {
-  await page.evaluate(() => window.scrollTo(0, 0));
-  await saveScreenshot(page, name);
-}
-
-/** The number a results cell shows, read back in SI ("16.09 µm" → 1.609e-5). */
-async function quantityIn(cell: Locator, unit: string): Promise<number> {
-  const text = (await cell.textContent())?.trim() ?? '';
-  const parsed = parseQuantity(text, unit);
-  if (!parsed.ok) throw new Error(`"${text}" is not a quantity in ${unit}: ${parsed.reason}`);
-  return parsed.value;
-}
-
-/** The value cell of a row of a results group, e.g. ("Geometry", "W"). */
-const resultCell = (page: Page, group: string, symbol: string) =>
-  page
-    .getByRole('table', { name: group })
-    .getByRole('row')
-    .filter({ has: page.getByRole('rowheader', { name: symbol, exact: true }) })
-    .getByRole('cell');
-
-/** The cell of one device row of the sheet table under a column title. */
-async function sheetCell(page: Page, device: string, column: string): Promise<Locator> {
-  const table = page.getByRole('table', { name: 'Devices' });
-  const titles = (await table.getByRole('columnheader').allTextContents()).map((t) => t.trim());
-  const index = titles.indexOf(column);
-  if (index < 0) throw new Error(`No column ${column} among ${titles.join(', ')}`);
-  return table.locator(`tr[data-device="${device}"]`).getByRole('cell').nth(index);
-}
-
-const field = (page: Page, name: string) => page.getByRole('textbox', { name, exact: true });
-
-/** Waits until the results answer the targets on screen (no request on its way). */
-async function resultsSettled(page: Page, modelBadge: string): Promise<void> {
-  const results = page.getByRole('region', { name: 'Results' });
-  await results.getByText(modelBadge).waitFor();
-  await results.getByRole('status', { name: 'Updating results' }).waitFor({ state: 'detached' });
-}
-
-async function openSheet(page: Page): Promise<void> {
-  await page.getByRole('table', { name: 'Projects' }).getByRole('link', { name: PROJECT }).click();
-  await page.getByRole('heading', { level: 1, name: PROJECT }).waitFor();
-  await page.getByRole('table', { name: 'Sheets' }).getByRole('link', { name: SHEET }).click();
-  await page.getByRole('table', { name: 'Devices' }).waitFor();
-  // Panels that load after the table move it down; click rows only once the page has settled.
-  await page.waitForLoadState('networkidle');
-}
 
 /** The device the first journey adds, shared with the export journey. */
 const added: { name?: string; w?: number } = {};
@@ -181,8 +127,10 @@ describeJourney('sizing devices on a sheet', (journey) => {
     const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Download CSV' }).click()]);
     expect(download.suggestedFilename()).toBe('Two-stage_amplifier.csv');
     const text = await readFile(await download.path(), 'utf8');
-    const [head, table] = text.split('\r\n\r\n');
-    const metadata = Object.fromEntries(Papa.parse<string[]>(head.trim()).data.slice(1).map(([key, value]) => [key, value]));
+    // The metadata comes first as "# key: value" lines, then a plain table any CSV reader takes.
+    const lines = text.split('\r\n');
+    const metadata = Object.fromEntries(lines.filter((line) => line.startsWith('# ')).map((line) => /^# ([^:]+): (.*)$/.exec(line)?.slice(1) ?? []));
+    const table = lines.filter((line) => !line.startsWith('#')).join('\r\n');
     expect(metadata).toMatchObject({ format: 'channelwright-sheet', project: PROJECT, sheet: SHEET, process: 'BF180-G' });
     const rows = Papa.parse<Record<string, string>>(table.trim(), { header: true }).data;
     const row = rows.find((r) => r.Name === added.name);

@@ -24,11 +24,14 @@ describe('membership, sheet and device changes leave audit rows (and a new membe
   const audit = async (query: Record<string, string>): Promise<AuditEvent[]> =>
     (await t.http().get(`/api/projects/${projectId}/audit`).query(query).set(bearer(tokens.designer)).expect(200)).body.map((e: unknown) => auditEventSchema.parse(e));
 
+  // Plain-text mail is wrapped at 72 characters: a sentence is read back with its line breaks as spaces.
+  const unwrapped = (text: string) => text.replace(/([^\n])\n(?=[^\n])/g, '$1 ');
+
   it('mails a new member a link to the project and records who added them with which role', async () => {
     await t.http().post(`/api/projects/${projectId}/members`).set(bearer(tokens.designer)).send({ email: NEWCOMER, role: 'designer' }).expect(201);
     const [mail] = await receivedMail(t, NEWCOMER);
     expect(mail).toMatchObject({ to: [NEWCOMER], subject: 'You were added to Wrenmoss sensor front end' });
-    expect(mail!.text).toContain(`${DEMO_ACCOUNTS.designer.displayName} added you to the project Wrenmoss sensor front end as designer.`);
+    expect(unwrapped(mail!.text)).toContain(`${DEMO_ACCOUNTS.designer.displayName} added you to the project Wrenmoss sensor front end as designer.`);
     expect(mail!.text).toContain(`${APP_URL}/projects/${projectId}`);
     expect(mail!.html).toContain(`href="${APP_URL}/projects/${projectId}"`);
     const [event] = await audit({ action: 'member.added' });
@@ -48,7 +51,7 @@ describe('membership, sheet and device changes leave audit rows (and a new membe
     expect((await outboxRows(t)).slice(mails).map((row) => row.recipient)).toEqual(['ghost@brackenfold.example']);
     expect(await audit({ action: 'member.added' })).toHaveLength(1);
     const [invitation] = await receivedMail(t, 'ghost@brackenfold.example');
-    expect(invitation.text).toContain('has no active account on this Channelwright server');
+    expect(unwrapped(invitation.text)).toContain('has no active account on this Channelwright server');
   });
 
   it('records a role change with the role before and after, and a removal', async () => {

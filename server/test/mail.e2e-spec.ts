@@ -40,7 +40,7 @@ describe('mail through the local SMTP sink (no SMTP_URL)', () => {
       from: 'Channelwright <no-reply@cw.brackenfold.example>',
     });
     expect(mail!.text).toContain('Note: <check the tail & mirror>');
-    expect(mail!.text).toContain(`Open the revision: ${APP_URL}/revisions/r-123`);
+    expect(mail!.text).toContain(`Open the revision:\n${APP_URL}/revisions/r-123`);
     expect(mail!.html).toContain(`<a href="${APP_URL}/revisions/r-123">Open the revision</a>`);
     expect(mail!.html).toContain('Note: &lt;check the tail &amp; mirror&gt;');
     expect(mail!.html).not.toContain('<check');
@@ -85,6 +85,16 @@ describe('mail through the local SMTP sink (no SMTP_URL)', () => {
     expect(mine.body.map((m: { subject: string }) => m.subject)).toEqual(['Review requested: Two-stage amplifier r1 — ΔVT ≤ 2 mV']);
     const designers = await t.http().get('/api/mail/mine').set(bearer(await t.loginAs(designer.email))).expect(200);
     expect(designers.body).toEqual([]);
+  });
+
+  it('wraps the plain-text part within 72 characters a line (RFC 5322, 2.1.1: at most 78), the link on a line of its own', async () => {
+    const long = 'Brackenfold Designer asks you to review r1 of the two-stage amplifier, whose input pair was re-sized to meet the offset budget of 2 mV and whose tail source moved to a longer channel.';
+    await t.app.get(MailService).notify({ to: 'wrap-check@brackenfold.example', subject: 'Long', heading: 'Review requested', paragraphs: [long], path: '/revisions/r-456', linkLabel: 'Open the revision' });
+    const mail = (await receivedMail(t, 'wrap-check@brackenfold.example')).find((m) => m.subject === 'Long')!;
+    const lines = mail.text.split(/\r?\n/);
+    expect(lines.filter((line) => !line.startsWith('http')).every((line) => line.length <= 72)).toBe(true);
+    expect(lines).toContain(`${APP_URL}/revisions/r-456`);
+    expect(mail.text.replace(/\s+/g, ' ')).toContain(long);
   });
 });
 

@@ -73,6 +73,8 @@ describe('stale results and recompute after a process version change', () => {
     const moved = await patchSheet(before, { processId: bf130.id });
     expect(moved.process).toMatchObject({ name: 'BF130-G', version: bf130.version, flavours: [] });
     expect(moved.devices.every((d) => d.stale)).toBe(true);
+    // Each stale result names the process it was computed on, not the sheet's new one.
+    expect(moved.devices.map((d) => d.computedWith.processName)).toEqual(['BF180-G', 'BF180-G']);
     expect(moved.totals.vdd).toBe(bf130.definition.vdd);
 
     const fresh = await recompute(moved);

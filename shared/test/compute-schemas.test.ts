@@ -26,8 +26,8 @@ describe('sizeRequestSchema', () => {
 
   it('refuses NaN, strings, a zero or negative current and a negative W or L, naming the field', () => {
     expect(refused({ ...size, id: Number.NaN }).field).toBe('id');
-    expect(refused({ ...size, id: '20u' })).toEqual({ field: 'id', message: 'id must be a number in A (prefixed text such as "20u" is read by the client, not here)' });
-    expect(refused({ ...size, id: 0 })).toEqual({ field: 'id', message: 'id must be above 0 A' });
+    expect(refused({ ...size, id: '20u' })).toEqual({ field: 'id', message: 'ID must be a number in A (prefixed text such as "20u" is read by the client, not here)' });
+    expect(refused({ ...size, id: 0 })).toEqual({ field: 'id', message: 'ID must be above 0 A' });
     expect(refused({ ...size, id: -1e-6 }).field).toBe('id');
     expect(refused({ ...size, l: -1e-6 }).field).toBe('l');
     expect(refused({ ...size, vov: undefined, w: -1e-6 }).field).toBe('w');

@@ -107,3 +107,13 @@ describe('parseQuantity', () => {
     );
   });
 });
+
+describe('gm/ID spellings', () => {
+  it('reads 18 S/A (S = A/V, SI Brochure, 9th ed., 2019, table 4) and the shorthand 18 A/V as 18 /V in a 1/V field', () => {
+    for (const text of ['18 S/A', '18 A/V', '18 1/V', '18 /V', '18']) expect(parseQuantity(text, '1/V')).toEqual({ ok: true, value: 18, unit: '1/V' });
+  });
+
+  it('still refuses A/V where a conductance is not what the field takes', () => {
+    expect(parseQuantity('18 A/V', 'V').ok).toBe(false);
+  });
+});

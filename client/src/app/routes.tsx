@@ -39,6 +39,7 @@ export const shellRoutes: ShellRoute[] = [
   { path: '/sheets/:sheetId/devices/:deviceId', page: () => import('./pages/device-page') },
   { path: '/reviews', page: () => import('../features/reviews/routes/review-inbox-route'), nav: { label: 'Reviews', icon: IconChecklist } },
   { path: '/revisions/:revisionId', page: () => import('../features/revisions/routes/revision-route') },
+  { path: '/revisions/:revisionId/devices/:deviceId', page: () => import('../features/revisions/routes/revision-device-route') },
   { path: '/projects/:projectId/audit', page: () => import('../features/audit/routes/project-audit-route') },
   { path: '/mail', page: () => import('../features/outbox/routes/my-mail-route'), nav: { label: 'My mail', icon: IconMailbox } },
   { path: '/admin/users', page: () => import('../features/users/routes/users-route'), access: isAdmin, nav: { label: 'Users', icon: IconUsers, section: 'admin' } },

@@ -1,12 +1,11 @@
 import { Text } from '@mantine/core';
-
-const dayFormat = new Intl.DateTimeFormat('en-GB', { year: 'numeric', month: 'short', day: 'numeric' });
+import { formatDay } from '../lib/format-date';
 
 /** The day of an ISO 8601 time, dimmed, as lists show when something last changed ("3 Mar 2025"). */
 export function DayText({ iso }: { iso: string }) {
   return (
     <Text size="xs" c="dimmed" style={{ whiteSpace: 'nowrap' }}>
-      {dayFormat.format(new Date(iso))}
+      {formatDay(iso)}
     </Text>
   );
 }

@@ -1,5 +1,6 @@
 import { Group, Stack, Text, Title } from '@mantine/core';
 import type { ReactNode } from 'react';
+import { useDocumentTitle } from '../lib/use-document-title';
 
 interface PageHeaderProps {
   title: string;
@@ -7,8 +8,9 @@ interface PageHeaderProps {
   actions?: ReactNode;
 }
 
-/** The title block every page opens with, so pages line up the same way. */
+/** The title block every page opens with, so pages line up the same way; it also names the browser tab. */
 export function PageHeader({ title, description, actions }: PageHeaderProps) {
+  useDocumentTitle(title);
   return (
     <Group justify="space-between" align="flex-end" mb="lg" wrap="wrap">
       <Stack gap={4}>

@@ -14,4 +14,7 @@ export const WARNING_TITLES: Record<WarningCode, string> = {
   TEMPERATURE_OUTSIDE_PROCESS_RANGE: 'The temperature is outside the process range',
   POINTS_WITHOUT_ANSWER: 'Some points have no answer',
   TEMPERATURE_INTERPOLATED: 'Temperature between characterised ones',
+  AREA_IMPLAUSIBLE: 'The device is implausibly large',
+  FINGERS_IMPLAUSIBLE: 'Implausibly many fingers',
+  CURRENT_DENSITY_IMPLAUSIBLE: 'More current per width than silicon carries',
 };

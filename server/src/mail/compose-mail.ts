@@ -16,7 +16,7 @@ export interface MailNotice {
 /** Builds the plain-text and the HTML part of a notice, both carrying the absolute link into the app. */
 export function composeMail(notice: MailNotice, appUrl: string): MailMessage {
   const link = new URL(notice.path, `${appUrl}/`).toString();
-  const text = [notice.heading, '', ...notice.paragraphs.flatMap((p) => [p, '']), `${notice.linkLabel}: ${link}`, '', '— Channelwright'].join('\n');
+  const text = [notice.heading, '', ...notice.paragraphs.flatMap((p) => [wrapText(p), '']), `${notice.linkLabel}:`, link, '', '— Channelwright'].join('\n');
   const html = [
     '<!doctype html><html><body style="font-family: sans-serif; line-height: 1.5">',
     `<h2>${escapeHtml(notice.heading)}</h2>`,
@@ -26,6 +26,30 @@ export function composeMail(notice: MailNotice, appUrl: string): MailMessage {
     '</body></html>',
   ].join('\n');
   return { to: notice.to, subject: notice.subject, text, html, link };
+}
+
+/** Plain-text lines are kept within this width (RFC 5322, 2.1.1: lines SHOULD be no more than 78 characters). */
+export const TEXT_WIDTH = 72;
+
+/** Breaks a paragraph at spaces so that no line is longer than `width`, keeping its own line breaks; a word longer than that stays whole. */
+export function wrapText(paragraph: string, width = TEXT_WIDTH): string {
+  return paragraph
+    .split('\n')
+    .map((line) => {
+      const lines: string[] = [];
+      let current = '';
+      for (const word of line.split(' ')) {
+        if (current !== '' && current.length + 1 + word.length > width) {
+          lines.push(current);
+          current = word;
+        } else {
+          current = current === '' ? word : `${current} ${word}`;
+        }
+      }
+      lines.push(current);
+      return lines.join('\n');
+    })
+    .join('\n');
 }
 
 const HTML_ESCAPES: Record<string, string> = { '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' };

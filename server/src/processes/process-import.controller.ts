@@ -1,6 +1,7 @@
 import {
   importProcessFieldsSchema,
   MODEL_CARD_MAX_BYTES,
+  PROCESS_IMPORT_MAX_BYTES,
   modelCardCheckFieldsSchema,
   modelCardCheckSchema,
   processProfileSchema,
@@ -17,7 +18,7 @@ import { DomainError } from '../common/errors/domain-error.js';
 import { ApiZodResponse } from '../common/openapi/api-zod.decorators.js';
 import { ZodValidationPipe } from '../common/validation/zod-validation.pipe.js';
 import type { Account } from '../users/users.service.js';
-import { FileTooLargeInterceptor } from './import/file-too-large.interceptor.js';
+import { fileTooLarge, megabytes } from '../common/files/file-too-large.interceptor.js';
 import { readUpload } from './import/read-process-file.js';
 import { MaintainersOnly } from './process-maintainer.guard.js';
 import { ProcessesService } from './processes.service.js';
@@ -29,6 +30,8 @@ interface UploadedProcessFile {
 }
 
 const LIMITS = { fileSize: MODEL_CARD_MAX_BYTES, fields: 10 };
+/** Above the card limit (the larger one): 413 naming both limits. */
+const FileTooLarge = fileTooLarge(`${megabytes(MODEL_CARD_MAX_BYTES)} (a model card may have ${megabytes(MODEL_CARD_MAX_BYTES)}, a process file ${megabytes(PROCESS_IMPORT_MAX_BYTES)})`);
 
 @ApiTags('processes')
 @ApiBearerAuth()
@@ -38,7 +41,7 @@ export class ProcessImportController {
 
   @Post('import')
   @MaintainersOnly()
-  @UseInterceptors(FileTooLargeInterceptor, FileFieldsInterceptor([{ name: 'file', maxCount: 1 }, { name: 'card', maxCount: 1 }], { limits: { ...LIMITS, files: 2 } }))
+  @UseInterceptors(FileTooLarge, FileFieldsInterceptor([{ name: 'file', maxCount: 1 }, { name: 'card', maxCount: 1 }], { limits: { ...LIMITS, files: 2 } }))
   @ApiConsumes('multipart/form-data')
   @ApiBody({
     schema: {
@@ -77,7 +80,7 @@ export class ProcessImportController {
   @Post('model-cards/check')
   @MaintainersOnly()
   @HttpCode(200)
-  @UseInterceptors(FileTooLargeInterceptor, FileInterceptor('file', { limits: { ...LIMITS, files: 1 } }))
+  @UseInterceptors(FileTooLarge, FileInterceptor('file', { limits: { ...LIMITS, files: 1 } }))
   @ApiConsumes('multipart/form-data')
   @ApiBody({
     schema: {

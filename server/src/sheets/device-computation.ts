@@ -34,10 +34,16 @@ export function computeDevice(targets: DeviceTargets, sheet: Pick<SheetEntity, '
   }
 }
 
+/** True when the targets refer to a corner or flavour the process lacks (a refusal, not a result to store). */
+export function isBadReference(computation: DeviceComputation): boolean {
+  const { error } = computation;
+  return error !== null && isErrorCode(error.code) && BAD_REFERENCE_CODES.has(error.code);
+}
+
 /** On create and edit: 400 naming the field when the targets refer to a corner or flavour the process lacks. */
 export function assertKnownToProcess(computation: DeviceComputation): void {
   const { error } = computation;
-  if (error && isErrorCode(error.code) && BAD_REFERENCE_CODES.has(error.code)) throw new DomainError(error.code, error.message, 400, error.field);
+  if (error && isBadReference(computation)) throw new DomainError(error.code as ErrorCode, error.message, 400, error.field);
 }
 
 /** The columns of a device row that hold a computation. */

@@ -43,7 +43,7 @@ export class SheetReader {
     const processes = new Map<string, ResolvedProcess>();
     for (const versionId of new Set(sheets.map((s) => s.processVersionId))) processes.set(versionId, await this.processes.resolveVersion(versionId, manager));
     const facts = await this.processes.versionFacts([...devices.map((d) => d.processVersionId), ...processes.keys()], manager);
-    const versionNumbers = new Map([...facts].map(([id, fact]) => [id, fact.number]));
+    const versionNumbers = new Map([...facts].map(([id, fact]) => [id, { number: fact.number, name: fact.profileName }]));
     const tableHashes = new Map<string, Map<string, string>>();
     for (const versionId of processes.keys()) tableHashes.set(versionId, await this.tables.currentHashes(versionId, manager));
     return sheets.map((sheet) => {

@@ -14,6 +14,7 @@ import type { ResolvedProcess } from '../processes/processes.service.js';
 import type { DeviceEntity } from './device.entity.js';
 import { constraintOf, sizeRequestOf } from './device-targets.js';
 import type { SheetEntity } from './sheet.entity.js';
+import { leakageBudgetOf, offsetBudgetsOf } from './sheet-budgets.js';
 import { sheetTotals } from './sheet-totals.js';
 
 /** A sheet with everything its response needs, read in one go (see SheetReader). */
@@ -23,8 +24,8 @@ export interface LoadedSheet {
   /** The newest version of the sheet's profile. */
   latestVersion: number;
   devices: DeviceEntity[];
-  /** Version number of every process version id the devices were computed on. */
-  versionNumbers: ReadonlyMap<string, number>;
+  /** Version number and profile name of every process version id the devices were computed on. */
+  versionNumbers: ReadonlyMap<string, { number: number; name: string }>;
   /** The SHA-256 of the current table of each device kind ("nmos/", "nmos/native") of the sheet's version. */
   tableHashes: ReadonlyMap<string, string>;
 }
@@ -86,7 +87,8 @@ export function toDevice(device: DeviceEntity, loaded: Pick<LoadedSheet, 'sheet'
     computedWith: {
       engineVersion: device.engineVersion,
       processVersionId: device.processVersionId,
-      processVersion: loaded.versionNumbers.get(device.processVersionId) ?? 0,
+      processVersion: loaded.versionNumbers.get(device.processVersionId)?.number ?? 0,
+      processName: loaded.versionNumbers.get(device.processVersionId)?.name ?? loaded.process.name,
       computedAt: device.computedAt.toISOString(),
       tableSha256: result?.table?.sha256 ?? null,
     },
@@ -125,6 +127,8 @@ export function toSheetSummary(loaded: LoadedSheet): SheetSummary {
     temperature: sheet.temperature,
     corner: sheet.corner,
     model: sheet.model,
+    leakageBudget: leakageBudgetOf(sheet),
+    offsetBudgets: offsetBudgetsOf(sheet),
     version: sheet.version,
     deviceCount: loaded.devices.length,
     staleCount,
@@ -139,6 +143,6 @@ export function toSheet(loaded: LoadedSheet): Sheet {
   return {
     ...toSheetSummary(loaded),
     devices,
-    totals: sheetTotals(devices, loaded.process.definition),
+    totals: sheetTotals(devices, loaded.process.definition, offsetBudgetsOf(loaded.sheet)),
   };
 }

@@ -1,6 +1,6 @@
-import { BF130G, BF180G, computeSize } from '@channelwright/shared/device';
+import { BF130G, BF180G, computeSize, extremeCorner } from '@channelwright/shared/device';
 import { deviceTargetsSchema, type DeviceResult, type Process } from '@channelwright/shared/schemas';
-import { extremeCorner, sheetTotals, type TotalsDevice } from './sheet-totals.js';
+import { sheetTotals, type TotalsDevice } from './sheet-totals.js';
 
 function sized(id: string, input: Parameters<typeof deviceTargetsSchema.parse>[0], process: Process = BF180G): TotalsDevice {
   const targets = deviceTargetsSchema.parse(input);
@@ -37,7 +37,9 @@ describe('sheet totals', () => {
 
   it('gives a match group of one device no offset estimate', () => {
     const totals = sheetTotals([sized('a', { name: 'A', polarity: 'nmos', id: 10e-6, l: 1e-6, vds: 0.5, vov: 0.2, matchGroup: 'alone' })], BF180G);
-    expect(totals.matchGroups).toEqual([{ name: 'alone', deviceIds: ['a'], sigmaVos: null, sigmaVt: null, sigmaId: null, worstPair: null }]);
+    expect(totals.matchGroups).toEqual([
+      { name: 'alone', deviceIds: ['a'], sigmaVos: null, sigmaVt: null, sigmaId: null, worstPair: null, sigmaBeta: null, gmId: null, budget: null, meetsBudget: null, requiredArea: null },
+    ]);
   });
 
   it('counts a device of multiplier m as one of m·W in its match group: σ(ΔVT) of two such falls as 1/√m', () => {
@@ -45,5 +47,15 @@ describe('sheet totals', () => {
     const one = sheetTotals(['a', 'b'].map((id) => sized(id, { name: id, polarity: 'nmos', id: 10e-6, l: 1e-6, vds: 0.5, vov: 0.2, matchGroup: 'g' })), BF180G);
     const four = sheetTotals(['a', 'b'].map((id) => sized(id, { name: id, polarity: 'nmos', id: 10e-6, l: 1e-6, vds: 0.5, vov: 0.2, matchGroup: 'g', multiplier: 4 })), BF180G);
     expect(four.matchGroups[0].sigmaVt! / one.matchGroups[0].sigmaVt!).toBeCloseTo(0.5, 12);
+  });
+
+  it('holds a match group against its offset budget and gives the W·L per device that meets it at the pair\'s gm/ID (Kinget 2005)', () => {
+    const pair = ['a', 'b'].map((id) => sized(id, { name: id, polarity: 'pmos', id: 10e-6, l: 0.5e-6, vds: 0.6, gmId: 16, matchGroup: 'input pair' }));
+    const [group] = sheetTotals(pair, BF180G, [{ group: 'input pair', sigmaVos: 2e-3 }]).matchGroups;
+    const result = pair[0].result!;
+    expect(group.budget).toBe(2e-3);
+    expect(group.meetsBudget).toBe((group.sigmaVos as number) <= 2e-3);
+    // σ(VOS) falls as 1/√(W·L): the area that meets the budget is the present one × (σ/budget)².
+    expect(group.requiredArea as number).toBeCloseTo(result.w * result.l * ((group.sigmaVos as number) / 2e-3) ** 2, 18);
   });
 });

@@ -1,5 +1,5 @@
-import { deviceParamsOf, isEngineError, leakage, matchGroupMismatch, prepareDevice, type MismatchDevice } from '@channelwright/shared/device';
-import { cornerNames, type DeviceResult, type DeviceTargets, type MatchGroupTotals, type Process, type SheetTotals } from '@channelwright/shared/schemas';
+import { deviceParamsOf, extremeCorner, isEngineError, leakage, matchGroupMismatch, offsetArea, prepareDevice, type MismatchDevice } from '@channelwright/shared/device';
+import type { DeviceResult, DeviceTargets, MatchGroupTotals, OffsetBudget, Process, SheetTotals } from '@channelwright/shared/schemas';
 
 /** What the totals need of a device. */
 export interface TotalsDevice {
@@ -11,9 +11,10 @@ export interface TotalsDevice {
 /**
  * The sheet's totals from the stored results, on the sheet's process: supply current and power of the
  * supply branches, gate area, off-state leakage at the hottest temperature of the process range at its
- * slowest and fastest corner, devices with warnings or without a result, and the offset of each match group.
+ * slowest and fastest corner, devices with warnings or without a result, and the offset of each match group
+ * against its budget.
  */
-export function sheetTotals(devices: readonly TotalsDevice[], process: Process): SheetTotals {
+export function sheetTotals(devices: readonly TotalsDevice[], process: Process, offsetBudgets: readonly OffsetBudget[] = []): SheetTotals {
   const sized = devices.filter((device): device is TotalsDevice & { result: DeviceResult } => device.result !== null);
   const supplyCurrent = sum(sized.filter((d) => d.targets.supplyBranch).map((d) => d.result.id * d.targets.multiplier));
   const hottest = process.tempRange?.max ?? process.tnom;
@@ -38,30 +39,12 @@ export function sheetTotals(devices: readonly TotalsDevice[], process: Process):
     warningDeviceIds,
     warningCount: sum(sized.map((d) => d.result.warnings.length)),
     failedDeviceIds: devices.filter((d) => d.result === null).map((d) => d.id),
-    matchGroups: matchGroups(devices, process),
+    matchGroups: matchGroups(devices, process, offsetBudgets),
   };
 }
 
 function sum(values: readonly number[]): number {
   return values.reduce((total, value) => total + value, 0);
-}
-
-/**
- * The slowest corner raises the threshold of both polarities most (then lowers kp most); the fastest
- * the opposite. TT counts as a corner with no shift.
- */
-export function extremeCorner(process: Process, which: 'slowest' | 'fastest'): string {
-  const sign = which === 'slowest' ? 1 : -1;
-  const score = (name: string) => {
-    const corner = process.corners.find((c) => c.name === name);
-    const dvt = corner ? corner.nmos.dvt + corner.pmos.dvt : 0;
-    const kp = corner ? corner.nmos.kpScale + corner.pmos.kpScale : 2;
-    return { dvt: sign * dvt, kp: -sign * kp };
-  };
-  return cornerNames(process).reduce((best, name) => {
-    const [a, b] = [score(name), score(best)];
-    return a.dvt > b.dvt || (a.dvt === b.dvt && a.kp > b.kp) ? name : best;
-  });
 }
 
 /**
@@ -78,8 +61,11 @@ function offCurrent(process: Process, device: TotalsDevice & { result: DeviceRes
   }
 }
 
-/** Pelgrom offset of the worst pair of each match group; a device of multiplier m counts as m·W. */
-function matchGroups(devices: readonly TotalsDevice[], process: Process): MatchGroupTotals[] {
+/**
+ * Pelgrom offset of the worst pair of each match group (a device of multiplier m counts as m·W), and with a
+ * budget the W·L per device of an equal pair that meets it at the pair's gm/ID (Kinget 2005).
+ */
+function matchGroups(devices: readonly TotalsDevice[], process: Process, budgets: readonly OffsetBudget[]): MatchGroupTotals[] {
   const groups = new Map<string, TotalsDevice[]>();
   for (const device of devices) {
     const name = device.targets.matchGroup;
@@ -93,6 +79,9 @@ function matchGroups(devices: readonly TotalsDevice[], process: Process): MatchG
         return mismatch ? [{ id: device.id, mismatch }] : [];
       });
       const worst = matchGroupMismatch(matched.map((m) => m.mismatch));
+      const budget = budgets.find((b) => b.group === name)?.sigmaVos ?? null;
+      const pair = worst ? [matched[worst.a].mismatch, matched[worst.b].mismatch] : null;
+      const gmId = pair ? (pair[0].gmId + pair[1].gmId) / 2 : null;
       return {
         name,
         deviceIds: members.map((d) => d.id),
@@ -100,6 +89,11 @@ function matchGroups(devices: readonly TotalsDevice[], process: Process): MatchG
         sigmaVt: worst?.sigmaVt ?? null,
         sigmaId: worst?.sigmaId ?? null,
         worstPair: worst ? ([matched[worst.a].id, matched[worst.b].id] as [string, string]) : null,
+        sigmaBeta: worst?.sigmaBeta ?? null,
+        gmId,
+        budget,
+        meetsBudget: budget === null || worst === null ? null : worst.sigmaVos <= budget,
+        requiredArea: budget === null || pair === null || gmId === null ? null : offsetArea(pair[0].avt, pair[0].abeta, gmId, budget),
       };
     });
 }

@@ -34,6 +34,14 @@ export class SheetEntity {
   @Column({ type: 'simple-enum', enum: MODELS, default: 'all-region' })
   model: (typeof MODELS)[number];
 
+  /** JSON text of the LeakageBudget; null without one. */
+  @Column({ type: 'text', nullable: true })
+  leakageBudget: string | null;
+
+  /** JSON text of the OffsetBudget list. */
+  @Column({ type: 'text', default: '[]' })
+  offsetBudgets: string;
+
   /** Optimistic concurrency: raised by every change of the sheet's own fields. */
   @Column({ type: 'integer', default: 1 })
   version: number;

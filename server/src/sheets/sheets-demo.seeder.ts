@@ -8,6 +8,7 @@ import { ProjectsService } from '../projects/projects.service.js';
 import type { DemoSeeder } from '../seed/demo-seeder.js';
 import { WRENMOSS_PROCESS_NAME, WRENMOSS_SHEETS } from './demo/wrenmoss-sheets.js';
 import { computationColumns, computeDevice } from './device-computation.js';
+import { budgetColumns } from './sheet-budgets.js';
 import { DeviceEntity } from './device.entity.js';
 import { SheetTables } from './sheet-tables.js';
 import { SheetEntity } from './sheet.entity.js';
@@ -34,8 +35,10 @@ export class SheetsDemoSeeder implements DemoSeeder {
     const process = await this.processes.resolveDefinition(profileId, undefined, manager);
     const model = this.config.characterisation.demo ? 'table' : 'all-region';
     for (const demo of WRENMOSS_SHEETS) {
-      const { processId: _id, processVersion: _version, ...fields } = createSheetRequestSchema.parse({ ...demo.sheet, model, processId: profileId });
-      const sheet = await manager.getRepository(SheetEntity).save(manager.create(SheetEntity, { ...fields, projectId, processVersionId: process.versionId }));
+      const { processId: _id, processVersion: _version, leakageBudget, offsetBudgets, ...fields } = createSheetRequestSchema.parse({ ...demo.sheet, model, processId: profileId });
+      const sheet = await manager
+        .getRepository(SheetEntity)
+        .save(manager.create(SheetEntity, { ...fields, ...budgetColumns({ leakageBudget, offsetBudgets }), projectId, processVersionId: process.versionId }));
       const devices = demo.devices.map((input) => deviceTargetsSchema.parse(input));
       const tables = await this.tables.sourceFor(sheet, devices, manager);
       for (const [position, targets] of devices.entries()) {

@@ -1,30 +1,35 @@
 import {
   deleteQuerySchema,
-  exportQuerySchema,
+  migrateSheetRequestSchema,
+  sheetMigrationSchema,
   sheetSchema,
   updateSheetRequestSchema,
   type DeleteQuery,
-  type ExportQuery,
+  type MigrateSheetRequest,
   type Sheet,
+  type SheetMigration,
   type UpdateSheetRequest,
 } from '@channelwright/shared/schemas';
-import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post, Query, Res } from '@nestjs/common';
-import { ApiBearerAuth, ApiProduces, ApiTags } from '@nestjs/swagger';
-import type { Response } from 'express';
+import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post, Query } from '@nestjs/common';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { z } from 'zod';
 import { CurrentUser } from '../common/auth/current-user.decorator.js';
 import { ApiZodBody, ApiZodResponse } from '../common/openapi/api-zod.decorators.js';
 import { ZodValidationPipe } from '../common/validation/zod-validation.pipe.js';
 import { ProjectAccess } from '../projects/project-access.guard.js';
 import type { Account } from '../users/users.service.js';
+import { SheetMigrationService } from './migration/sheet-migration.service.js';
 import { SheetsService } from './sheets.service.js';
 
-/** One sheet: members read and export; designers and owners edit, delete and recompute. */
+/** One sheet: members read; designers and owners edit, delete, recompute and migrate it to another process. */
 @ApiTags('sheets')
 @ApiBearerAuth()
 @Controller('sheets')
 export class SheetsController {
-  constructor(private readonly sheets: SheetsService) {}
+  constructor(
+    private readonly sheets: SheetsService,
+    private readonly migration: SheetMigrationService,
+  ) {}
 
   @Get(':id')
   @ProjectAccess('read', 'sheet')
@@ -57,14 +62,12 @@ export class SheetsController {
     return this.sheets.recompute(id);
   }
 
-  @Get(':id/export')
-  @ProjectAccess('read', 'sheet')
-  @ApiProduces('text/csv')
-  @ApiZodResponse(200, z.string(), 'key,value metadata, an empty line, then one row per device under a header row with units')
-  async export(@Param('id') id: string, @Query(new ZodValidationPipe(exportQuerySchema)) _query: ExportQuery, @Res({ passthrough: true }) response: Response): Promise<string> {
-    const { fileName, csv } = await this.sheets.exportCsv(id);
-    response.attachment(fileName);
-    response.type('text/csv; charset=utf-8');
-    return csv;
+  @Post(':id/migrate')
+  @HttpCode(200)
+  @ProjectAccess('edit', 'sheet')
+  @ApiZodBody(migrateSheetRequestSchema)
+  @ApiZodResponse(200, sheetMigrationSchema, 'Every device re-solved on another process, side by side with the source; a new sheet of the project unless preview (the source is never changed)')
+  migrate(@Param('id') id: string, @Body(new ZodValidationPipe(migrateSheetRequestSchema)) request: MigrateSheetRequest, @CurrentUser() user: Account): Promise<SheetMigration> {
+    return this.migration.migrate(id, request, user);
   }
 }

@@ -10,8 +10,8 @@ import { ProcessesService } from '../processes/processes.service.js';
 import { ProjectsService } from '../projects/projects.service.js';
 import { assertVersion } from '../projects/stale-edit.js';
 import { computationColumns, computeDevice } from './device-computation.js';
+import { budgetColumns } from './sheet-budgets.js';
 import { DeviceEntity } from './device.entity.js';
-import { sheetCsv, sheetCsvFileName } from './sheet-csv.js';
 import { assertSheetCorner, chosenProcess } from './sheet-process-choice.js';
 import { sheetNotFound, SheetReader } from './sheet-reader.js';
 import { targetsOf, toSheet, toSheetSummary } from './sheet-response.js';
@@ -42,13 +42,6 @@ export class SheetsService {
     return toSheet(await this.reader.load(sheetId));
   }
 
-  /** The sheet as CSV (see sheetCsv for the layout) and its file name. */
-  async exportCsv(sheetId: string): Promise<{ fileName: string; csv: string }> {
-    const sheet = await this.get(sheetId);
-    const projectName = (await this.projects.namesOf([sheet.projectId])).get(sheet.projectId) ?? '';
-    return { fileName: sheetCsvFileName(projectName, sheet.name), csv: sheetCsv(sheet, projectName, new Date()) };
-  }
-
   /** The process profiles the project's sheets are on (for the project's audit trail). */
   profileIdsOfProject(projectId: string): Promise<string[]> {
     return this.usage.profileIdsOfProjects([projectId]);
@@ -58,8 +51,10 @@ export class SheetsService {
     const id = await this.unitOfWork.run(async (manager) => {
       const process = (await chosenProcess(this.processes, manager, request, editor))!;
       assertSheetCorner(process.definition, request.corner);
-      const { processId: _id, processVersion: _version, ...fields } = request;
-      const sheet = await manager.getRepository(SheetEntity).save(manager.create(SheetEntity, { ...fields, projectId, processVersionId: process.versionId }));
+      const { processId: _id, processVersion: _version, leakageBudget, offsetBudgets, ...fields } = request;
+      const sheet = await manager.getRepository(SheetEntity).save(
+        manager.create(SheetEntity, { ...fields, ...budgetColumns({ leakageBudget, offsetBudgets }), projectId, processVersionId: process.versionId }),
+      );
       await this.audit.record(manager, sheetAudit('sheet.created', sheet, undefined, sheetFields(sheet)));
       return sheet.id;
     });
@@ -76,11 +71,11 @@ export class SheetsService {
       const { sheet } = loaded;
       assertVersion('sheet', sheet, request.version);
       const process = (await chosenProcess(this.processes, manager, request, editor, loaded.process.profileId)) ?? loaded.process;
-      const { version: _edited, processId: _id, processVersion: _number, ...fields } = request;
+      const { version: _edited, processId: _id, processVersion: _number, leakageBudget, offsetBudgets, ...fields } = request;
       const corner = fields.corner ?? sheet.corner;
       assertSheetCorner(process.definition, corner);
       const before = sheetFields(sheet);
-      await manager.getRepository(SheetEntity).save(Object.assign(sheet, fields, { processVersionId: process.versionId, version: sheet.version + 1 }));
+      await manager.getRepository(SheetEntity).save(Object.assign(sheet, fields, budgetColumns({ leakageBudget, offsetBudgets }), { processVersionId: process.versionId, version: sheet.version + 1 }));
       await this.audit.record(manager, sheetAudit('sheet.updated', sheet, before, sheetFields(sheet)));
     });
     return this.get(sheetId);

@@ -7,7 +7,7 @@ import { EngineError, isEngineError } from './errors.js';
 import { type OperatingPoint, operatingPoint } from './operating-point.js';
 import { overdriveForCurrent } from './overdrive.js';
 import { type PreparedDevice, prepareDevice } from './resolve-device.js';
-import { say } from './say.js';
+import { say, voltageNames } from './say.js';
 import { checkLength } from './solve.js';
 import { operatingPointWarnings } from './warnings.js';
 
@@ -71,7 +71,7 @@ function biasedOperatingPoint(device: PreparedDevice, request: CornersRequest & 
     const id = request.id as number;
     vgs = vt + overdriveForCurrent(model, channel.beta, slopeFactorOf(device, channel, vsb), device.ut, channel.lambda, vds, id, channel.terms);
     if (vgs > device.vdd) {
-      throw new EngineError('ID_NOT_REACHABLE_BELOW_VDD', `At ${device.corner}, ${say(device.temperature, '°C')}, W = ${say(w, 'm')} would need VGS = ${say(vgs, 'V')} (above vdd = ${say(device.vdd, 'V')}) to carry ${say(id, 'A')}`, 'id');
+      throw new EngineError('ID_NOT_REACHABLE_BELOW_VDD', `At ${device.corner}, ${say(device.temperature, '°C')}, W = ${say(w, 'm')} would need ${voltageNames(device.polarity).vgs} = ${say(vgs, 'V')} (above VDD = ${say(device.vdd, 'V')}) to carry ${say(id, 'A')}`, 'id');
     }
   }
   return operatingPoint(device, model, w, l, { vgs, vds, vsb }, fingers);

@@ -86,6 +86,8 @@ export const BF180G: Process = {
       params: { ...BF180G_NMOS, vt0: -0.12, kp: 320e-6, gamma: 0.15, twoPhiF: 0.6, lambda: 0.06, lRef: 1e-6, vtTc: -0.8e-3, avt: 6e-9, lmin: 0.5e-6, wmin: 0.5e-6 },
     },
   ],
+  // The model names of the invented demo model cards (server/src/characterisation/demo-cards/bf180g.lib).
+  spiceModels: { nmos: 'bfn18', pmos: 'bfp18', flavours: { native: 'bfn18na' } },
 };
 
 /** BF130-G: invented 130 nm-class CMOS, vdd 1.2 V, tnom 27 °C, −40 … 125 °C (for the "migrate a sheet" example). */
@@ -140,6 +142,8 @@ export const BF130G: Process = {
     js: 6e-4,
   },
   corners: demoCorners(),
+  // The model names of the invented demo model cards (server/src/characterisation/demo-cards/bf130g.lib).
+  spiceModels: { nmos: 'bfn13', pmos: 'bfp13' },
 };
 
 /** The demo processes the server seeds, in order. */

@@ -99,6 +99,18 @@ export {
   INTRINSIC_CARRIER_DENSITY_300K,
 } from './derive-process.js';
 export { operatingPointWarnings, WARNING_THRESHOLDS } from './warnings.js';
+export { sizePlausibilityWarnings, SIZE_PLAUSIBILITY } from './size-plausibility.js';
+export { voltageNames } from './say.js';
+
+// Analyses of a whole sheet, through the public calls above (so they follow whatever model a device uses).
+export { type SizedDevice, type CornersCall, cornersRequestOf } from './sized-device.js';
+export { type MatrixDevice, type MatrixRowCells, matrixColumns, cornerMatrixRow, cornerMatrixRows, worstCells } from './corner-matrix.js';
+export { limitMargin, limitStatus, TIGHT_FRACTION } from './limit-status.js';
+export { extremeCorner } from './extreme-corner.js';
+export { type LeakageDevice, sheetLeakage, leakageTemperatures } from './leakage-budget.js';
+export { offsetArea } from './offset-area.js';
+export { type ResizeMember, type MemberSize, type MemberSizer, type OffsetFigures, type GroupResizePlan, resizeMatchGroup } from './match-group-resize.js';
+export { type MigrationOptions, type MigratedTargets, migrateTargets } from './migrate-targets.js';
 
 // Invented demo data for the seed and the docs.
 export { BF180G, BF130G, DEMO_PROCESSES, DEMO_DATA_NOTICE } from './demo-processes.js';

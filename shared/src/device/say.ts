@@ -9,3 +9,8 @@ export function say(value: number, unit: string): string {
 export function sayGmId(value: number): string {
   return `${formatQuantity(value, '', { digits: 4 })} /V`;
 }
+
+/** The names a designer uses for the polarity-normalised voltages: VGS, VDS, VSB for NMOS; VSG, VSD, VBS for PMOS. */
+export function voltageNames(polarity: 'nmos' | 'pmos'): { vgs: string; vds: string; vsb: string; vdsat: string } {
+  return polarity === 'pmos' ? { vgs: 'VSG', vds: 'VSD', vsb: 'VBS', vdsat: 'VSDsat' } : { vgs: 'VGS', vds: 'VDS', vsb: 'VSB', vdsat: 'VDSsat' };
+}

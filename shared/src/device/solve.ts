@@ -4,10 +4,11 @@ import { EngineError } from './errors.js';
 import { type OperatingPoint, operatingPoint } from './operating-point.js';
 import { overdriveForCurrent, overdriveForGmId } from './overdrive.js';
 import { type PreparedDevice } from './resolve-device.js';
-import { say } from './say.js';
+import { say, voltageNames } from './say.js';
 import type { ChannelTerms } from './short-channel.js';
 import { DEFAULT_MAX_FINGER_WIDTH, type SnappedWidth, snapWidth } from './snap-width.js';
 import type { Warning } from '../schemas/warning.js';
+import { sizePlausibilityWarnings } from './size-plausibility.js';
 import { operatingPointWarnings } from './warnings.js';
 
 /** Widths above this are refused as no circuit's, m (10 cm). */
@@ -49,7 +50,7 @@ export function constraintOf(target: Pick<SizeTarget, Constraint>): Constraint {
 
 export function checkLength(device: PreparedDevice, l: number, field = 'l'): void {
   if (l < device.params.lmin) {
-    throw new EngineError('L_BELOW_LMIN', `L = ${say(l, 'm')} is below the process minimum lmin = ${say(device.params.lmin, 'm')}`, field);
+    throw new EngineError('L_BELOW_LMIN', `L = ${say(l, 'm')} is below the process minimum ${say(device.params.lmin, 'm')}`, field);
   }
 }
 
@@ -98,7 +99,7 @@ export function solveSize(device: PreparedDevice, model: CurrentModel, target: S
   let drawn: { snapped: SnappedWidth; wRequired: number };
   if (constraint === 'w') {
     const w = target.w as number;
-    if (w < params.wmin) throw new EngineError('W_BELOW_WMIN', `W = ${say(w, 'm')} is below the process minimum wmin = ${say(params.wmin, 'm')}`, 'w');
+    if (w < params.wmin) throw new EngineError('W_BELOW_WMIN', `W = ${say(w, 'm')} is below the process minimum ${say(params.wmin, 'm')}`, 'w');
     if (!(w <= MAX_WIDTH)) throw new EngineError('W_TOO_LARGE', `W = ${say(w, 'm')} is more than ${say(MAX_WIDTH, 'm')}`, 'w');
     drawn = { snapped: snapWidth(w, params.wgrid, params.wmin, maxFingerWidth), wRequired: w };
   } else {
@@ -121,7 +122,7 @@ export function solveSize(device: PreparedDevice, model: CurrentModel, target: S
       const most = drainCurrent(model, beta, n, ut, lambda, device.vdd - vt, vds, terms);
       throw new EngineError(
         'ID_NOT_REACHABLE_BELOW_VDD',
-        `W = ${say(snapped.w, 'm')} cannot carry ${say(id, 'A')} with VGS ≤ vdd = ${say(device.vdd, 'V')}: it would need VGS = ${say(vgs, 'V')}; at vdd it carries ${say(most, 'A')}`,
+        `W = ${say(snapped.w, 'm')} cannot carry ${say(id, 'A')} with ${voltageNames(device.polarity).vgs} ≤ VDD = ${say(device.vdd, 'V')}: it would need ${voltageNames(device.polarity).vgs} = ${say(vgs, 'V')}; at VDD it carries ${say(most, 'A')}`,
         'id',
       );
     }
@@ -135,5 +136,6 @@ export function solveSize(device: PreparedDevice, model: CurrentModel, target: S
       message: `The width needed, ${say(wRequired / snapped.fingers, 'm')} per finger, is below wmin = ${say(params.wmin, 'm')}: the finger was widened to wmin${constraint === 'vgs' ? ', so ID is above the target' : ' and VGS lowered to keep ID'}; a longer L brings W back above wmin.`,
     });
   }
+  warnings.push(...sizePlausibilityWarnings({ w: snapped.w, l, fingers: snapped.fingers, id: op.id }));
   return { ...op, fingers: snapped.fingers, fingerWidth: snapped.fingerWidth, wRequired, constraint, warnings };
 }

@@ -29,7 +29,7 @@ export function sizeWithTable(request: SizeRequest, process: Process, choice: Ta
   const constraint = constraintOf(request);
   const { params } = device;
   if (constraint === 'w' && (request.w as number) < params.wmin) {
-    throw new EngineError('W_BELOW_WMIN', `W = ${say(request.w as number, 'm')} is below the process minimum wmin = ${say(params.wmin, 'm')}`, 'w');
+    throw new EngineError('W_BELOW_WMIN', `W = ${say(request.w as number, 'm')} is below the process minimum ${say(params.wmin, 'm')}`, 'w');
   }
   const maxFingerWidth = request.maxFingerWidth ?? DEFAULT_MAX_FINGER_WIDTH;
   const oneFinger = sizeFromTable(prepared, { ...conditions, id: request.id, [constraint]: request[constraint] }).w;

@@ -1,3 +1,4 @@
+import { formatQuantity } from '../units/format-quantity.js';
 import { EngineError } from './errors.js';
 
 export interface ThresholdParams {
@@ -16,7 +17,7 @@ export function bodyEffect(gamma: number, twoPhiF: number, vsb: number): number 
   if (!(twoPhiF + vsb > 0)) {
     throw new EngineError(
       'VSB_BEYOND_FORWARD_LIMIT',
-      `VSB = ${vsb} V forward-biases the source–body junction beyond −2φF = ${-twoPhiF} V; the body-effect equation has no answer there`,
+      `The source–body voltage ${formatQuantity(vsb, 'V', { digits: 4 })} forward-biases the junction beyond −2φF = ${formatQuantity(-twoPhiF, 'V', { digits: 4 })}; the body-effect equation has no answer there`,
       'vsb',
     );
   }

@@ -3,7 +3,7 @@ import type { CurrentModel } from './drain-current.js';
 import type { OperatingPoint } from './operating-point.js';
 import { gmIdLimit } from './overdrive.js';
 import type { PreparedDevice } from './resolve-device.js';
-import { say, sayGmId } from './say.js';
+import { say, sayGmId, voltageNames } from './say.js';
 import { hasShortChannelTerms } from './short-channel.js';
 
 /** The thresholds of the warnings, documented in docs/model.md. */
@@ -22,6 +22,7 @@ export function operatingPointWarnings(device: PreparedDevice, model: CurrentMod
   const { params } = device;
   const nUt = op.n * op.ut;
   const add = (code: WarningCode, message: string) => warnings.push({ code, message });
+  const v = voltageNames(device.polarity);
   if (model === 'square-law' && op.vov < WARNING_THRESHOLDS.squareLawOverdriveInNUt * nUt) {
     add(
       'SQUARE_LAW_NEAR_THRESHOLD',
@@ -38,23 +39,23 @@ export function operatingPointWarnings(device: PreparedDevice, model: CurrentMod
     );
   }
   if (!op.saturated) {
-    add('VDS_BELOW_VDSSAT', `VDS = ${say(op.vds, 'V')} is below VDSsat = ${say(op.vdsat, 'V')}: the device is not saturated (triode); gm and ro are lower than a saturated device would give, though ID is met at this VDS.`);
+    add('VDS_BELOW_VDSSAT', `${v.vds} = ${say(op.vds, 'V')} is below ${v.vdsat} = ${say(op.vdsat, 'V')}: the device is not saturated (triode); gm and ro are lower than a saturated device would give, though ID is met at this ${v.vds}.`);
   }
   if (op.vsb < 0) {
-    add('SOURCE_BODY_FORWARD_BIASED', `VSB = ${say(op.vsb, 'V')} forward-biases the source–body junction: VT is lowered, and the junction conducts once |VSB| nears 0.5 V.`);
+    add('SOURCE_BODY_FORWARD_BIASED', `${v.vsb} = ${say(op.vsb, 'V')} forward-biases the source–body junction: VT is lowered, and the junction conducts once |${v.vsb}| nears 0.5 V.`);
   }
   const limit = gmIdLimit(op.n, op.ut);
   if (op.gmId > WARNING_THRESHOLDS.gmIdFractionOfLimit * limit) {
     add('GM_ID_NEAR_WEAK_INVERSION_LIMIT', `gm/ID = ${sayGmId(op.gmId)} is within 10 % of its weak-inversion limit 1/(n·UT) = ${sayGmId(limit)}: more width buys little more gm, and the device is large and slow.`);
   }
   if (op.leakage.conductsAtZeroVgs) {
-    add('DEPLETION_CONDUCTS_AT_VGS0', `This is a depletion-mode device (VT = ${say(device.vtZeroBias, 'V')} at VSB = 0): it conducts ${say(op.leakage.idAtZeroVgs, 'A')} at VGS = 0, which is its normal current, not leakage; it needs VGS below VT to turn off.`);
+    add('DEPLETION_CONDUCTS_AT_VGS0', `This is a depletion-mode device (VT = ${say(device.vtZeroBias, 'V')} at ${v.vsb} = 0): it conducts ${say(op.leakage.idAtZeroVgs, 'A')} at ${v.vgs} = 0, which is its normal current, not leakage; it needs ${v.vgs} below VT to turn off.`);
   }
   if (op.vgs > device.vdd) {
-    add('VGS_ABOVE_VDD', `VGS = ${say(op.vgs, 'V')} is above vdd = ${say(device.vdd, 'V')}: the gate cannot be driven there from this supply.`);
+    add('VGS_ABOVE_VDD', `${v.vgs} = ${say(op.vgs, 'V')} is above VDD = ${say(device.vdd, 'V')}: the gate cannot be driven there from this supply.`);
   }
   if (op.vds > device.vdd) {
-    add('VDS_ABOVE_VDD', `VDS = ${say(op.vds, 'V')} is above vdd = ${say(device.vdd, 'V')}.`);
+    add('VDS_ABOVE_VDD', `${v.vds} = ${say(op.vds, 'V')} is above VDD = ${say(device.vdd, 'V')}.`);
   }
   const range = device.tempRange;
   if (range && (device.temperature < range.min || device.temperature > range.max)) {

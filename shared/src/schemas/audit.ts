@@ -21,6 +21,8 @@ export const AUDIT_ACTIONS = [
   'sheet.updated',
   'sheet.deleted',
   'sheet.recomputed',
+  'sheet.imported',
+  'sheet.migrated',
   'device.created',
   'device.updated',
   'device.deleted',

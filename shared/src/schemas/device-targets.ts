@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { polaritySchema } from './process.js';
 import { editedVersionSchema } from './projects.js';
 import { CONSTRAINTS } from './request-fields.js';
+import { deviceLimitsSchema } from './sheet-corners.js';
 import { sizeRequestSchema } from './size.js';
 import { label, text } from './text-fields.js';
 
@@ -25,6 +26,17 @@ const multiplier = z
   .describe('Identical devices in parallel (m): current, area and leakage count m times');
 const supplyBranch = z.boolean({ error: 'supplyBranch must be true or false' }).describe('Its ID is drawn from the supply: counted in the sheet\'s supply current and power');
 const notes = text('notes', 5000);
+const nodeName = (terminal: string) =>
+  z
+    .string({ error: `${terminal} node must be text` })
+    .trim()
+    .min(1, `${terminal} node must not be empty`)
+    .max(50, `${terminal} node must have at most 50 characters`)
+    .regex(/^[A-Za-z0-9_]+$/, `${terminal} node may hold letters, digits and _ only (a netlist reads anything else as syntax)`)
+    .optional();
+const nodes = z
+  .strictObject({ drain: nodeName('Drain'), gate: nodeName('Gate'), source: nodeName('Source'), bulk: nodeName('Bulk') })
+  .describe('Node names for the SPICE export; a terminal without one gets a placeholder (d_<name>, g_<name> …)');
 
 /** The target fields of a device; each optional here, the full and the patch schemas below pick what is required. */
 const targetFields = {
@@ -48,6 +60,8 @@ const targetFields = {
   multiplier,
   supplyBranch,
   notes,
+  limits: deviceLimitsSchema,
+  nodes,
 };
 
 export const DEVICE_CONSTRAINTS = CONSTRAINTS;
@@ -85,6 +99,8 @@ export const deviceTargetsSchema = z
     multiplier: targetFields.multiplier.default(1),
     supplyBranch: targetFields.supplyBranch.default(false),
     notes: targetFields.notes.default(''),
+    limits: targetFields.limits.optional(),
+    nodes: targetFields.nodes.optional(),
   })
   .superRefine((value, ctx) => checkOneConstraint(value, ctx, false))
   .describe('Sizing targets: ID, L, VDS, VSB and exactly one of vov, gmId, w, vgs; corner, temperature and model default to the sheet\'s');
@@ -122,6 +138,8 @@ export const updateDeviceRequestSchema = z
     multiplier: targetFields.multiplier.optional(),
     supplyBranch: targetFields.supplyBranch.optional(),
     notes: targetFields.notes.optional(),
+    limits: targetFields.limits.nullable().optional(),
+    nodes: targetFields.nodes.nullable().optional(),
   })
   .superRefine((value, ctx) => checkOneConstraint(value, ctx, true));
 export type UpdateDeviceRequest = z.infer<typeof updateDeviceRequestSchema>;

@@ -14,7 +14,8 @@ import { sizeRequestSchema, sizeResponseSchema } from './size.js';
 export const computedWithSchema = z.object({
   engineVersion: z.string(),
   processVersionId: z.string(),
-  processVersion: z.number().int().describe('The version number of the sheet\'s process profile'),
+  processVersion: z.number().int().describe('The version number of the process profile the result was computed on'),
+  processName: z.string().describe('The name of that process profile (another than the sheet\'s after a move)'),
   computedAt: z.string(),
   tableSha256: z.string().nullable().optional().describe('Model table: the SHA-256 of the table the result was made from'),
 });

@@ -215,6 +215,25 @@ export type Flavour = z.infer<typeof flavourSchema>;
 
 const temperature = (name: 'tempRange.min' | 'tempRange.max' | 'tnom') => parameter(name);
 
+const spiceModelName = z
+  .string({ error: 'A SPICE model name must be text' })
+  .trim()
+  .regex(/^[A-Za-z][A-Za-z0-9_.]{0,49}$/, 'A SPICE model name starts with a letter and holds letters, digits, _ and . only (at most 50)');
+
+/**
+ * The names the foundry's (or the designer's) SPICE model cards give each device type, for netlists the
+ * product writes: one per polarity and one per flavour. Absent: "<process>_nmos", "<process>_pmos",
+ * "<process>_<flavour>".
+ */
+export const spiceModelsSchema = z
+  .strictObject({
+    nmos: spiceModelName,
+    pmos: spiceModelName,
+    flavours: z.record(z.string(), spiceModelName).optional(),
+  })
+  .describe('SPICE model names per polarity and per flavour, for the netlist export');
+export type SpiceModels = z.infer<typeof spiceModelsSchema>;
+
 export const processSchema = z
   .strictObject({
     name: z.string({ error: 'Process name must be text' }).trim().min(1, 'Process name must not be empty').max(100),
@@ -226,6 +245,7 @@ export const processSchema = z
     pmos: deviceParamsSchema,
     corners: z.array(cornerSchema).max(20, 'At most 20 corners'),
     flavours: z.array(flavourSchema).max(20, 'At most 20 flavours').optional(),
+    spiceModels: spiceModelsSchema.optional(),
   })
   .superRefine((process, ctx) => {
     if (process.tempRange && process.tempRange.min >= process.tempRange.max) {
@@ -246,6 +266,9 @@ export const processSchema = z
       if (flavours.has(flavour.name)) ctx.addIssue({ code: 'custom', path: ['flavours', index, 'name'], message: `Flavour ${flavour.name} is listed twice` });
       flavours.add(flavour.name);
     });
+    for (const name of Object.keys(process.spiceModels?.flavours ?? {})) {
+      if (!flavours.has(name)) ctx.addIssue({ code: 'custom', path: ['spiceModels', 'flavours', name], message: `spiceModels names a flavour ${name} the process does not have` });
+    }
   })
   .describe('A process: parameters per polarity at tnom (°C), supply vdd, corners and optional flavours');
 export type Process = z.infer<typeof processSchema>;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { formatQuantity } from '../units/format-quantity.js';
 import { polaritySchema, processSchema } from './process.js';
 
 /**
@@ -22,13 +23,43 @@ export const MODEL_LABELS: Record<Model, string> = {
   table: 'Tables from the model card',
 };
 
-/** A number field in SI units with a range; its messages name the field. */
+/**
+ * What a designer calls each number field, for messages: "L must be above 0 m", not "l must be above 0".
+ * PMOS voltages keep the NMOS-like symbol here (the schema does not know the polarity); the engine's own
+ * messages, which do, use VSG, VSD, VBS.
+ */
+export const FIELD_LABELS: Readonly<Record<string, string>> = {
+  id: 'ID',
+  l: 'L',
+  w: 'W',
+  vds: 'VDS',
+  vsb: 'VSB',
+  vgs: 'VGS',
+  vov: 'VOV',
+  gmId: 'gm/ID',
+  temperature: 'Temperature',
+  temperatures: 'Each temperature',
+  maxFingerWidth: 'The finger-width limit',
+  vddTolerance: 'The supply tolerance',
+  sigmaVos: 'The offset budget σ(VOS)',
+  'leakageBudget.current': 'The leakage budget',
+  'leakageBudget.temperature': 'The temperature of the leakage budget',
+};
+
+/** A limit of a field for a message, in engineering notation with its unit ("1 mm", "20 V", "0.1"). */
+function limitText(value: number, unit: string): string {
+  if (unit === '1/V') return `${formatQuantity(value, '', { digits: 6 })} /V`;
+  return formatQuantity(value, unit, { digits: 6 });
+}
+
+/** A number field in SI units with a range; its messages name the field by its label and give limits in engineering notation. */
 export function quantity(field: string, unit: string, range: { gt?: number; min?: number; max: number }) {
+  const name = FIELD_LABELS[field] ?? field;
   const inUnit = unit === '' ? '' : ` in ${unit}`;
-  let schema = z.number({ error: `${field} must be a number${inUnit} (prefixed text such as "20u" is read by the client, not here)` });
-  if (range.gt !== undefined) schema = schema.gt(range.gt, { error: `${field} must be above ${range.gt}${unit ? ` ${unit}` : ''}` });
-  if (range.min !== undefined) schema = schema.min(range.min, { error: `${field} must be at least ${range.min}${unit ? ` ${unit}` : ''}` });
-  return schema.max(range.max, { error: `${field} must be at most ${range.max}${unit ? ` ${unit}` : ''}` });
+  let schema = z.number({ error: `${name} must be a number${inUnit} (prefixed text such as "20u" is read by the client, not here)` });
+  if (range.gt !== undefined) schema = schema.gt(range.gt, { error: `${name} must be above ${limitText(range.gt, unit)}` });
+  if (range.min !== undefined) schema = schema.min(range.min, { error: `${name} must be at least ${limitText(range.min, unit)}` });
+  return schema.max(range.max, { error: `${name} must be at most ${limitText(range.max, unit)}` });
 }
 
 /** A non-empty list without repeats, at most `max` long; its messages name the field. */

@@ -2,8 +2,8 @@ import { z } from 'zod';
 import { deviceListSchema } from './device.js';
 import { polaritySchema } from './process.js';
 import { editedVersionSchema } from './projects.js';
-import { modelSchema } from './request-fields.js';
 import { sizeRequestSchema } from './size.js';
+import { modelSchema, quantity } from './request-fields.js';
 import { label, text } from './text-fields.js';
 import { warningSchema } from './warning.js';
 
@@ -29,6 +29,26 @@ const sheetTemperature = size.temperature.unwrap().describe('Default temperature
 const sheetCorner = size.corner.unwrap().describe('Default corner of the devices; a corner of the process');
 const processVersionNumber = size.processVersion.unwrap();
 
+/** The sheet's off-state leakage budget: the total at the worst corner at `temperature` must stay at or below `current`. */
+export const leakageBudgetSchema = z
+  .strictObject({
+    current: quantity('leakageBudget.current', 'A', { gt: 0, max: 1 }).describe('Budget for the total off-state leakage, A'),
+    temperature: quantity('leakageBudget.temperature', '°C', { min: -200, max: 300 }).describe('At this temperature, °C (e.g. the hottest of the range)'),
+  })
+  .describe('e.g. 50 nA at 125 °C');
+export type LeakageBudget = z.infer<typeof leakageBudgetSchema>;
+
+/** A match group's offset budget: the input-referred σ(VOS) of its worst pair must stay at or below `sigmaVos`. */
+export const offsetBudgetSchema = z.strictObject({
+  group: label('group', 50),
+  sigmaVos: quantity('sigmaVos', 'V', { gt: 0, max: 1 }).describe('1-sigma input-referred offset budget of the group\'s worst pair, V'),
+});
+export type OffsetBudget = z.infer<typeof offsetBudgetSchema>;
+const offsetBudgets = z
+  .array(offsetBudgetSchema, { error: 'offsetBudgets must be a list' })
+  .max(100, 'offsetBudgets may list at most 100 groups')
+  .refine((list) => new Set(list.map((b) => b.group)).size === list.length, 'offsetBudgets lists a group twice');
+
 export const createSheetRequestSchema = z.strictObject({
   name: sheetName,
   description: sheetDescription.default(''),
@@ -37,6 +57,8 @@ export const createSheetRequestSchema = z.strictObject({
   temperature: sheetTemperature.nullable().default(null),
   corner: sheetCorner.default('TT'),
   model: modelSchema.default('all-region'),
+  leakageBudget: leakageBudgetSchema.nullable().default(null),
+  offsetBudgets: offsetBudgets.default([]),
 });
 export type CreateSheetRequest = z.infer<typeof createSheetRequestSchema>;
 export type CreateSheetRequestInput = z.input<typeof createSheetRequestSchema>;
@@ -56,6 +78,8 @@ export const updateSheetRequestSchema = z
     temperature: sheetTemperature.nullable().optional(),
     corner: sheetCorner.optional(),
     model: modelSchema.optional(),
+    leakageBudget: leakageBudgetSchema.nullable().optional(),
+    offsetBudgets: offsetBudgets.optional(),
   })
   .refine((value) => Object.keys(value).some((key) => key !== 'version'), { path: ['name'], message: 'Give at least one field to change besides version' });
 export type UpdateSheetRequest = z.infer<typeof updateSheetRequestSchema>;
@@ -67,8 +91,19 @@ export const deleteQuerySchema = z.object({
 });
 export type DeleteQuery = z.infer<typeof deleteQuerySchema>;
 
+export const EXPORT_FORMATS = ['csv', 'csv-metadata', 'spice'] as const;
+
+/**
+ * ?format= on GET /api/sheets/:id/export: csv (the device table, with its metadata in `#` comment lines
+ * unless metadata=none), csv-metadata (the metadata alone as key,value rows: the second file of a plain
+ * table), spice (one instance line per device). lengths=um writes W, L and finger widths in µm with "(um)" in
+ * the header; fingers=omit leaves nf= off the SPICE lines (level 1–3 models have no such parameter).
+ */
 export const exportQuerySchema = z.object({
-  format: z.enum(['csv'], { error: 'format must be "csv"' }).default('csv'),
+  format: z.enum(EXPORT_FORMATS, { error: 'format must be "csv", "csv-metadata" or "spice"' }).default('csv'),
+  metadata: z.enum(['comments', 'none'], { error: 'metadata must be "comments" or "none"' }).default('comments'),
+  lengths: z.enum(['m', 'um'], { error: 'lengths must be "m" or "um"' }).default('m'),
+  fingers: z.enum(['nf', 'omit'], { error: 'fingers must be "nf" or "omit"' }).default('nf'),
 });
 export type ExportQuery = z.infer<typeof exportQuerySchema>;
 
@@ -96,6 +131,8 @@ export const sheetSummarySchema = z.object({
   temperature: z.number().nullable(),
   corner: z.string(),
   model: modelSchema,
+  leakageBudget: leakageBudgetSchema.nullable(),
+  offsetBudgets: z.array(offsetBudgetSchema),
   version: z.number().int().describe('Raised by every change of the sheet\'s own fields (not of its devices)'),
   deviceCount: z.number().int(),
   staleCount: z.number().int().describe('Devices whose stored result is stale'),
@@ -121,6 +158,11 @@ export const matchGroupTotalsSchema = z.object({
   sigmaVt: z.number().nullable(),
   sigmaId: z.number().nullable(),
   worstPair: z.tuple([z.string(), z.string()]).nullable().describe('Device ids of that pair'),
+  sigmaBeta: z.number().nullable().describe('σ(Δβ/β) of that pair'),
+  gmId: z.number().nullable().describe('Mean gm/ID of that pair, 1/V'),
+  budget: z.number().nullable().describe('The group\'s σ(VOS) budget, V (offsetBudgets); null without one'),
+  meetsBudget: z.boolean().nullable(),
+  requiredArea: z.number().nullable().describe('W·L (× multiplier) per device of an equal pair that meets the budget at this gm/ID (Kinget 2005), m²'),
 });
 export type MatchGroupTotals = z.infer<typeof matchGroupTotalsSchema>;
 

@@ -39,7 +39,7 @@ export function parseQuantity(text: string, expectedUnit?: string): ParsedQuanti
   if (!given.ok) return given;
 
   const unit = given.unit ?? expected ?? { dimension: {}, scaleExponent: 0 };
-  if (expected && given.unit && !sameDimension(expected, given.unit)) {
+  if (expected && given.unit && !sameDimension(expected, given.unit) && !isGmIdSpelling(expected, given.unit)) {
     return {
       ok: false,
       reason: `${trimmed} is ${describeDimension(given.unit.dimension)}, but this field takes ${describeDimension(expected.dimension)}`,
@@ -48,6 +48,19 @@ export function parseQuantity(text: string, expectedUnit?: string): ParsedQuanti
   const value = scaled(mantissa, given.prefixExponent + (given.unit?.scaleExponent ?? 0));
   if (!Number.isFinite(value)) return { ok: false, reason: `${trimmed} is too large to be a number` };
   return { ok: true, value, unit: expectedUnit ?? formatDimension(unit.dimension) };
+}
+
+const PER_VOLT: UnitExpression = { dimension: { V: -1 }, scaleExponent: 0 };
+
+/**
+ * gm/ID is written 1/V, S/A (siemens per ampere, which is 1/V since S = A/V: SI Brochure, 9th ed., 2019,
+ * table 4) or, in the trade's shorthand, A/V (common practice, no source): in a field that takes 1/V the two
+ * others are read as 1/V.
+ */
+function isGmIdSpelling(expected: UnitExpression, given: UnitExpression): boolean {
+  if (!sameDimension(expected, PER_VOLT)) return false;
+  const spelled = (dimension: Record<string, number>) => sameDimension(given, { dimension, scaleExponent: 0 });
+  return spelled({ S: 1, A: -1 }) || spelled({ A: 1, V: -1 });
 }
 
 type Suffix = { ok: true; prefixExponent: number; unit?: UnitExpression } | { ok: false; reason: string };

@@ -7,6 +7,7 @@ import { PageLoader } from '../../components/page-loader';
 import { RegionErrorBoundary } from '../../components/region-error-boundary';
 import { AppHeader } from './app-header';
 import { AppNavbar } from './app-navbar';
+import classes from './app-layout.module.css';
 
 /** The signed-in frame: header, navbar, the standing caution, and the current page. */
 export function AppLayout() {
@@ -19,6 +20,9 @@ export function AppLayout() {
       navbar={{ width: 232, breakpoint: 'sm', collapsed: { mobile: !navbarOpen } }}
       padding="md"
     >
+      <a href="#main-content" className={classes.skipLink}>
+        Skip to the main content
+      </a>
       <AppShell.Header>
         <AppHeader navbarOpen={navbarOpen} onToggleNavbar={navbar.toggle} />
       </AppShell.Header>
@@ -27,7 +31,7 @@ export function AppLayout() {
           <AppNavbar onNavigate={navbar.close} />
         </RegionErrorBoundary>
       </AppShell.Navbar>
-      <AppShell.Main>
+      <AppShell.Main id="main-content" tabIndex={-1}>
         <Container size="xl" px={0}>
           <Stack gap="lg">
             <CautionBanner />

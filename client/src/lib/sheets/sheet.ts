@@ -11,6 +11,6 @@ export const getSheet = (id: string, signal?: AbortSignal): Promise<Sheet> =>
   apiRequest(`/sheets/${encodeURIComponent(id)}`, { schema: sheetSchema, signal });
 
 export const sheetQueryOptions = (id: string) =>
-  queryOptions({ queryKey: sheetKeys.detail(id), queryFn: ({ signal }) => getSheet(id, signal) });
+  queryOptions({ queryKey: sheetKeys.detail(id), queryFn: ({ signal }) => getSheet(id, signal), enabled: id !== '' });
 
 export const useSheet = (id: string) => useQuery(sheetQueryOptions(id));

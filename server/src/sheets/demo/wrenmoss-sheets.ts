@@ -19,11 +19,11 @@ const biasGenerator: DemoSheet = {
     description: 'Invented demo data. Constant-gm style reference: NMOS pair with a degenerated side, PMOS mirror, cascodes whose sources sit above the body, a start-up device and a native start-up current source.',
   },
   devices: [
-    { name: 'MN1', function: 'reference diode (constant-gm core)', polarity: 'nmos', id: 5 * µ, l: 2 * µ, vds: 0.55, vov: 0.12, matchGroup: 'core NMOS' },
+    { name: 'MN1', function: 'reference diode (constant-gm core)', polarity: 'nmos', id: 5 * µ, l: 2 * µ, vds: 0.55, vov: 0.12, matchGroup: 'core NMOS', limits: [{ figure: 'headroom', min: 0.35 }], notes: 'Keep 350 mV between VDS and VDSsat: the core must stay saturated as the supply droops.' },
     { name: 'MN2', function: 'degenerated side of the core, 4× wider', polarity: 'nmos', id: 5 * µ, l: 2 * µ, vds: 0.45, vov: 0.06, multiplier: 4, matchGroup: 'core NMOS', notes: 'Source on the degeneration resistor: sized with four parallel devices.' },
     { name: 'MN3', function: 'cascode of the reference branch', polarity: 'nmos', id: 5 * µ, l: 1 * µ, vds: 0.4, vsb: 0.55, vov: 0.15, notes: 'Source above the body: the body effect raises VT.' },
     { name: 'MN4', function: 'cascode of the output branch', polarity: 'nmos', id: 5 * µ, l: 1 * µ, vds: 0.4, vsb: 0.45, vov: 0.15 },
-    { name: 'MP1', function: 'PMOS mirror, reference branch', polarity: 'pmos', id: 5 * µ, l: 2 * µ, vds: 0.5, vov: 0.2, matchGroup: 'bias PMOS mirror', supplyBranch: true },
+    { name: 'MP1', function: 'PMOS mirror, reference branch', polarity: 'pmos', id: 5 * µ, l: 2 * µ, vds: 0.5, vov: 0.2, matchGroup: 'bias PMOS mirror', supplyBranch: true, limits: [{ figure: 'headroom', min: 0.25 }, { figure: 'vgs', max: 1.1 }] },
     { name: 'MP2', function: 'PMOS mirror, output branch', polarity: 'pmos', id: 5 * µ, l: 2 * µ, vds: 0.5, vov: 0.2, matchGroup: 'bias PMOS mirror', supplyBranch: true },
     { name: 'MS1', function: 'start-up device (off once the core runs)', polarity: 'nmos', id: 100 * n, l: 1 * µ, vds: 1.0, gmId: 27, notes: 'Weak inversion: it only has to pull the core out of the zero-current state.' },
     { name: 'MNAT', function: 'native start-up current source', polarity: 'nmos', flavour: 'native', id: 1 * µ, l: 2 * µ, vds: 0.5, vgs: 0, supplyBranch: true, notes: 'Depletion-mode native NMOS with its gate at its source: conducts at VGS = 0.' },
@@ -34,6 +34,7 @@ const twoStageAmplifier: DemoSheet = {
   sheet: {
     name: 'Two-stage amplifier',
     description: 'Invented demo data. PMOS input pair (offset budget 2 mV 1-sigma), NMOS mirror load, tail source, common-source second stage; compensation left to the designer.',
+    offsetBudgets: [{ group: 'input pair', sigmaVos: 2e-3 }],
   },
   devices: [
     { name: 'M1', function: 'input pair (+)', polarity: 'pmos', id: 10 * µ, l: 0.5 * µ, vds: 0.6, gmId: 16, matchGroup: 'input pair', notes: 'Offset budget 2 mV 1-sigma for the pair.' },
@@ -52,6 +53,7 @@ const sleepSwitch: DemoSheet = {
   sheet: {
     name: 'Sleep switch',
     description: 'Invented demo data. Large NMOS power switch for the sensor\'s sleep mode and its gate driver; the off-state leakage at 125 °C is the battery-life concern.',
+    leakageBudget: { current: 50e-9, temperature: 125 },
   },
   devices: [
     { name: 'MSW', function: 'sleep switch (power gate, fully on)', polarity: 'nmos', id: 20e-3, l: 0.18 * µ, vds: 0.05, vgs: 1.8, temperature: 125, notes: 'Deep triode when on (VDS = 50 mV); off-state leakage at 125 °C sets the sleep current.' },

@@ -1,5 +1,6 @@
 import type { AuditEvent } from '@channelwright/shared/schemas';
 import { Badge, Code, Table, Text } from '@mantine/core';
+import { formatDateTime } from '../../../lib/format-date';
 
 function Change({ event }: { event: AuditEvent }) {
   if (event.before === null && event.after === null) return <Text span size="xs" c="dimmed">—</Text>;
@@ -28,7 +29,7 @@ export function AuditTable({ events }: { events: AuditEvent[] }) {
       <Table.Tbody>
         {events.map((event) => (
           <Table.Tr key={event.id}>
-            <Table.Td style={{ whiteSpace: 'nowrap' }}>{new Date(event.at).toLocaleString()}</Table.Td>
+            <Table.Td style={{ whiteSpace: 'nowrap' }}>{formatDateTime(event.at)}</Table.Td>
             <Table.Td>{event.actor?.displayName ?? 'system'}</Table.Td>
             <Table.Td>
               <Badge variant="outline" color="gray" radius="sm" tt="none">{event.action}</Badge>

@@ -2,6 +2,7 @@ import { Box, Center, Group, Paper, Stack, Text, Title } from '@mantine/core';
 import type { ReactNode } from 'react';
 import { Brand } from '../../../components/brand';
 import { ColorSchemeToggle } from '../../../components/color-scheme-toggle';
+import { useDocumentTitle } from '../../../lib/use-document-title';
 import classes from './auth-layout.module.css';
 
 interface AuthLayoutProps {
@@ -13,6 +14,7 @@ interface AuthLayoutProps {
 
 /** The frame of the pages before sign-in: the product's name and job, then one card. */
 export function AuthLayout({ title, children, footer }: AuthLayoutProps) {
+  useDocumentTitle(title);
   return (
     <Box className={classes.page}>
       <Group justify="flex-end" p="md">

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { linearAxisFor, linearTicks } from './linear-ticks';
-import { logAxisFor } from './log-axis';
+import { logAxisFor } from '../../../lib/charts/log-axis';
 import { formatTick } from './tick-format';
 
 describe('chart axes', () => {

@@ -12,7 +12,9 @@ import { buildSizeRequest, type FieldErrors } from '../model/size-request';
 import type { TargetsValues } from '../model/targets';
 import { DeviceDetailsFields } from './device-details-fields';
 import { DeviceWorkbench } from './device-workbench';
+import { LimitsFields } from './limits-fields';
 import { StaleEditAlert } from './stale-edit-alert';
+import { useUnsavedChangesGuard } from '../hooks/use-unsaved-changes-guard';
 
 interface DeviceEditorProps {
   sheet: Sheet;
@@ -46,10 +48,13 @@ export function DeviceEditor({ sheet, process, device, initial, editable, reload
     form.resetDirty(values);
     setVersion(stored.version);
   };
+  const guard = useUnsavedChangesGuard({ dirty: editable && form.isDirty(), what: device ? device.targets.name : 'this new device' });
   const saver = useSaveDevice(sheet.id, device?.id, (saved) => {
     notifications.show({ color: 'channel', message: `${saved.targets.name} saved${saved.result ? '' : ', but the engine could not size it'}` });
-    if (!device) void navigate(`/sheets/${sheet.id}/devices/${saved.id}`, { replace: true });
-    else reset(saved);
+    if (!device) {
+      guard.allow();
+      void navigate(`/sheets/${sheet.id}/devices/${saved.id}`, { replace: true });
+    } else reset(saved);
   });
 
   const submit = (againstVersion = version) => {
@@ -88,6 +93,7 @@ export function DeviceEditor({ sheet, process, device, initial, editable, reload
   const footer = (
     <Stack gap="xs">
       <DeviceDetailsFields part="circuit" values={details} onChange={setDetail} errors={errors} readOnly={!editable} />
+      <LimitsFields limits={details.limits} polarity={targets.polarity} onChange={(limits) => setDetail('limits', limits)} errors={errors} readOnly={!editable} />
       {saver.outcome.kind === 'conflict' && <StaleEditAlert onLoadTheirs={() => void loadTheirs()} onSaveMine={() => void saveMine()} saving={saver.saving} />}
       {saver.outcome.kind === 'refused' && !refusalField && (
         <Alert color="red" variant="light" title="Not saved" role="alert">
@@ -112,17 +118,20 @@ export function DeviceEditor({ sheet, process, device, initial, editable, reload
   );
 
   return (
-    <DeviceWorkbench
-      values={targets}
-      onChange={setTarget}
-      process={process}
-      processRef={processRef}
-      defaults={defaults}
-      readOnly={!editable}
-      extraErrors={errors}
-      formHeader={<DeviceDetailsFields part="identity" values={details} onChange={setDetail} errors={errors} readOnly={!editable} />}
-      formFooter={footer}
-      charts={charts}
-    />
+    <>
+      {guard.dialog}
+      <DeviceWorkbench
+        values={targets}
+        onChange={setTarget}
+        process={process}
+        processRef={processRef}
+        defaults={defaults}
+        readOnly={!editable}
+        extraErrors={errors}
+        formHeader={<DeviceDetailsFields part="identity" values={details} onChange={setDetail} errors={errors} readOnly={!editable} />}
+        formFooter={footer}
+        charts={charts}
+      />
+    </>
   );
 }

@@ -56,6 +56,7 @@ export function DeviceWorkbench({ values, onChange, process, processRef, default
             result={sizing.result}
             polarity={values.polarity}
             missing={sizing.missing}
+            invalid={sizing.invalid}
             error={sizing.error}
             errorShownInForm={sizing.errorShownInForm}
             updating={sizing.updating}

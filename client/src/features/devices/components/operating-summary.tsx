@@ -1,7 +1,7 @@
 import type { SizeResponse } from '@channelwright/shared/schemas';
 import { Badge, Group } from '@mantine/core';
 import { Quantity } from '../../../components/quantity';
-import { regionWords } from '../model/result-groups';
+import { regionWords } from '../../../lib/results/result-groups';
 import { LabelledFigure } from '../../../components/labelled-figure';
 
 const REGION_COLORS = { weak: 'grape', moderate: 'teal', strong: 'channel' } as const;

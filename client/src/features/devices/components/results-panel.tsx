@@ -2,9 +2,9 @@ import type { Polarity, SizeResponse } from '@channelwright/shared/schemas';
 import { Alert, Group, Loader, Paper, SimpleGrid, Stack, Text, Title } from '@mantine/core';
 import { IconAlertCircle } from '@tabler/icons-react';
 import { isApiError } from '../../../lib/api-error';
-import { resultGroups } from '../model/result-groups';
+import { resultGroups } from '../../../lib/results/result-groups';
 import { OperatingSummary } from './operating-summary';
-import { ResultGroupTable } from './result-group-table';
+import { ResultGroupTable } from '../../../components/result-group-table';
 import { WarningsList } from './warnings-list';
 
 interface ResultsPanelProps {
@@ -12,6 +12,8 @@ interface ResultsPanelProps {
   polarity: Polarity;
   /** The symbols still to be filled in before anything can be sized. */
   missing: string[];
+  /** A field does not read: the result shown is the last valid entry's, greyed. */
+  invalid?: boolean;
   error: unknown;
   /** The error is shown beside its field in the form, so here it is only pointed at. */
   errorShownInForm: boolean;
@@ -28,7 +30,8 @@ function Refusal({ error, shownInForm }: { error: unknown; shownInForm: boolean 
 }
 
 /** The sized device: summary, cautions, then every figure in its group, each with its unit. */
-export function ResultsPanel({ result, polarity, missing, error, errorShownInForm, updating }: ResultsPanelProps) {
+export function ResultsPanel({ result, polarity, missing, invalid = false, error, errorShownInForm, updating }: ResultsPanelProps) {
+  const outdated = Boolean(error) || missing.length > 0 || invalid;
   return (
     <Stack gap="sm" aria-label="Results" role="region">
       <Group justify="space-between" align="center" h={24}>
@@ -50,8 +53,13 @@ export function ResultsPanel({ result, polarity, missing, error, errorShownInFor
         </Text>
       )}
       {error ? <Refusal error={error} shownInForm={errorShownInForm} /> : null}
+      {invalid && !error && (
+        <Text size="sm" c="dimmed" role="status">
+          Correct the highlighted field{result ? ': the results below are for the last valid entry' : ''}.
+        </Text>
+      )}
       {result && (
-        <Stack gap="sm" style={{ opacity: error || missing.length > 0 ? 0.45 : 1 }}>
+        <Stack gap="sm" style={{ opacity: outdated ? 0.45 : 1 }} aria-disabled={outdated} data-outdated={outdated}>
           <Paper withBorder radius="sm" p="sm">
             <Stack gap="sm">
               <OperatingSummary result={result} />

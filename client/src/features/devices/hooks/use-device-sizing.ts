@@ -23,6 +23,8 @@ export function useDeviceSizing(values: TargetsValues, process: ProcessRef, defa
     errorShownInForm: serverField !== undefined,
     errors,
     missing: built.missing.map((field) => symbolOf(field, values.polarity)),
+    /** A field does not read (`-20u`, `abc`): what is shown answers the last valid entry. */
+    invalid: Object.keys(built.errors).length > 0,
     updating: built.request !== null && !live.settled,
   };
 }

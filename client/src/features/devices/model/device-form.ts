@@ -1,16 +1,26 @@
 import {
   deviceTargetsSchema,
   fieldOfIssue,
+  MATRIX_FIGURE_INFO,
+  type DeviceLimit,
+  type MatrixFigure,
   type Device,
   type DeviceTargetsInput,
   type Sheet,
   type SizeRequestInput,
   type UpdateDeviceRequestInput,
 } from '@channelwright/shared/schemas';
-import { formatQuantity } from '@channelwright/shared/units';
+import { formatQuantity, parseQuantity } from '@channelwright/shared/units';
 import { QUANTITY_FIELDS } from './quantity-fields';
 import type { FieldErrors } from './size-request';
 import { DEFAULT_TARGETS, type QuantityField, type TargetsValues } from './targets';
+
+/** One limit of the corner matrix as typed: a figure and a minimum and/or maximum in its unit ("50m", "-20 %"). */
+export interface LimitRow {
+  figure: MatrixFigure;
+  min: string;
+  max: string;
+}
 
 /** What a stored device has besides its sizing targets. */
 export interface DeviceDetails {
@@ -20,9 +30,40 @@ export interface DeviceDetails {
   multiplier: string;
   supplyBranch: boolean;
   notes: string;
+  limits: LimitRow[];
 }
 
-export type DetailErrors = Partial<Record<keyof DeviceDetails, string>>;
+export type DetailErrors = Partial<Record<keyof DeviceDetails | `limits.${number}`, string>>;
+
+/** The unit a limit of a figure is typed in: % for a change of ID, plain for gm/gds. */
+const limitUnit = (figure: MatrixFigure) => ({ '%': '', 'V/V': '' } as Record<string, string>)[MATRIX_FIGURE_INFO[figure].unit] ?? MATRIX_FIGURE_INFO[figure].unit;
+
+function limitValueText(figure: MatrixFigure, value: number | undefined): string {
+  if (value === undefined) return '';
+  if (MATRIX_FIGURE_INFO[figure].unit === '%') return `${Number((value * 100).toPrecision(6))} %`;
+  return formatQuantity(value, limitUnit(figure), { digits: 6 });
+}
+
+export const limitRowsOf = (limits: readonly DeviceLimit[] | undefined): LimitRow[] =>
+  (limits ?? []).map((l) => ({ figure: l.figure, min: limitValueText(l.figure, l.min), max: limitValueText(l.figure, l.max) }));
+
+/** The limits typed, read in SI (a change of ID as a fraction), or the reason a row does not read. */
+export function readLimits(rows: readonly LimitRow[]): { limits: DeviceLimit[]; errors: DetailErrors } {
+  const errors: DetailErrors = {};
+  const limits: DeviceLimit[] = [];
+  rows.forEach((row, index) => {
+    const read = (text: string) => {
+      if (text.trim() === '') return undefined;
+      const parsed = parseQuantity(text, limitUnit(row.figure));
+      if (!parsed.ok) errors[`limits.${index}`] = parsed.reason;
+      return parsed.ok ? parsed.value : undefined;
+    };
+    const [min, max] = [read(row.min), read(row.max)];
+    if (min === undefined && max === undefined && !errors[`limits.${index}`]) errors[`limits.${index}`] = 'Give a minimum, a maximum or both';
+    limits.push({ figure: row.figure, ...(min === undefined ? {} : { min }), ...(max === undefined ? {} : { max }) });
+  });
+  return { limits, errors };
+}
 
 /** A stored number as the designer would type it: "20 µA", "500 nm"; gm/ID and °C as plain numbers. */
 export function fieldText(value: number | undefined, field: QuantityField): string {
@@ -59,6 +100,7 @@ export function valuesOfDevice(device: Device, sheet: Sheet): { targets: Targets
       multiplier: String(t.multiplier),
       supplyBranch: t.supplyBranch,
       notes: t.notes,
+      limits: limitRowsOf(t.limits),
     },
   };
 }
@@ -67,7 +109,7 @@ export function valuesOfDevice(device: Device, sheet: Sheet): { targets: Targets
 export function valuesOfNewDevice(sheet: Sheet, name: string): { targets: TargetsValues; details: DeviceDetails } {
   return {
     targets: { ...DEFAULT_TARGETS, model: sheet.model, corner: '', temperature: '', vds: fieldText(sheet.process.vdd / 2, 'vds') },
-    details: { name, function: '', matchGroup: '', multiplier: '1', supplyBranch: false, notes: '' },
+    details: { name, function: '', matchGroup: '', multiplier: '1', supplyBranch: false, notes: '', limits: [] },
   };
 }
 
@@ -79,6 +121,8 @@ export type BuiltTargets = { ok: true; targets: DeviceTargetsInput } | { ok: fal
  */
 export function buildDeviceTargets(request: SizeRequestInput, values: TargetsValues, details: DeviceDetails): BuiltTargets {
   const multiplier = Number(details.multiplier);
+  const limits = readLimits(details.limits);
+  if (Object.keys(limits.errors).length > 0) return { ok: false, errors: limits.errors };
   const targets: DeviceTargetsInput = {
     name: details.name,
     function: details.function,
@@ -96,6 +140,7 @@ export function buildDeviceTargets(request: SizeRequestInput, values: TargetsVal
     multiplier: details.multiplier.trim() === '' ? Number.NaN : multiplier,
     supplyBranch: details.supplyBranch,
     notes: details.notes,
+    ...(limits.limits.length > 0 ? { limits: limits.limits } : {}),
   };
   const checked = deviceTargetsSchema.safeParse(targets);
   if (checked.success) return { ok: true, targets };
@@ -126,5 +171,6 @@ export function deviceChanges(
   if (constraint && (dirty('constraint') || dirty(constraint))) changes[constraint] = targets[constraint];
   for (const field of ['name', 'function', 'multiplier', 'supplyBranch', 'notes'] as const) if (dirty(`details.${field}`)) changes[field] = targets[field];
   if (dirty('details.matchGroup')) changes.matchGroup = targets.matchGroup ?? null;
+  if (dirty('details.limits')) changes.limits = targets.limits ?? null;
   return changes as UpdateDeviceRequestInput;
 }

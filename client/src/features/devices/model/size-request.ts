@@ -1,6 +1,6 @@
-import { fieldOfIssue, sizeRequestSchema, type SizeRequestInput } from '@channelwright/shared/schemas';
+import { FIELD_LABELS, fieldOfIssue, sizeRequestSchema, type Polarity, type SizeRequestInput } from '@channelwright/shared/schemas';
 import { parseQuantity } from '@channelwright/shared/units';
-import { QUANTITY_FIELDS } from './quantity-fields';
+import { QUANTITY_FIELDS, symbolOf } from './quantity-fields';
 import type { QuantityField, TargetsValues } from './targets';
 
 /** Which stored process profile (and version) the device is sized in. */
@@ -69,7 +69,7 @@ export function buildSizeRequest(values: TargetsValues, process: ProcessRef, def
   if (checked.success) return { request, errors, missing };
   for (const issue of checked.error.issues) {
     const field = fieldOfIssue(issue);
-    if (field && FORM_FIELDS.has(field) && !(field in errors)) errors[field as keyof FieldErrors] = issue.message;
+    if (field && FORM_FIELDS.has(field) && !(field in errors)) errors[field as keyof FieldErrors] = inPolarity(issue.message, field, values.polarity);
   }
   return { request: null, errors, missing };
 }
@@ -78,4 +78,12 @@ function temperatureOf(typed: number | undefined, defaults: TargetDefaults | und
   if (typed !== undefined) return { temperature: typed };
   if (defaults?.temperature !== undefined && defaults.temperature !== null) return { temperature: defaults.temperature };
   return {};
+}
+
+/** The shared schema names a field by its NMOS symbol ("VDS must be above 0 V"); a PMOS form labels it VSD, and so does its message. */
+function inPolarity(message: string, field: string, polarity: Polarity): string {
+  const label = FIELD_LABELS[field];
+  if (!label || !(field in QUANTITY_FIELDS)) return message;
+  const symbol = symbolOf(field as QuantityField, polarity);
+  return message.startsWith(`${label} `) ? `${symbol}${message.slice(label.length)}` : message;
 }

@@ -95,14 +95,26 @@ describe('the device page of a stored device', { timeout: 20_000 }, () => {
   });
 
   it("shows the server's refusal of a field beside it", async () => {
-    fakeServer({ patch: () => errorBody(400, 'DEVICE_NAME_TAKEN', 'Another device of this sheet is called M2', 'name') });
+    fakeServer({ patch: () => errorBody(400, 'VALIDATION_FAILED', 'L = 100 nm is below the process minimum 180 nm', 'l') });
+    const { user } = await openDevice();
+
+    await retype(user, 'L', '100n');
+    await user.click(screen.getByRole('button', { name: 'Save' }));
+
+    await waitFor(() => expect(field('L')).toHaveAccessibleDescription('L = 100 nm is below the process minimum 180 nm'));
+    expect(field('L')).toHaveValue('100n');
+  });
+
+  it('says a taken name is taken, beside the name, and does not call it an edit conflict', async () => {
+    fakeServer({ patch: () => errorBody(409, 'DEVICE_NAME_TAKEN', 'This sheet already has a device named M2', 'name') });
     const { user } = await openDevice();
 
     await retype(user, 'Name', 'M2');
     await user.click(screen.getByRole('button', { name: 'Save' }));
 
-    await waitFor(() => expect(field('Name')).toHaveAccessibleDescription('Another device of this sheet is called M2'));
+    await waitFor(() => expect(field('Name')).toHaveAccessibleDescription('Name taken: This sheet already has a device named M2'));
     expect(field('Name')).toHaveValue('M2');
+    expect(screen.queryByText('Someone changed this device since you opened it')).not.toBeInTheDocument();
   });
 
   it('lets a viewer read the device but not change or save it', async () => {

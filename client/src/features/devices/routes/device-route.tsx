@@ -1,4 +1,5 @@
-import { Badge, Group, Stack } from '@mantine/core';
+import { Badge, Group, Stack, Title } from '@mantine/core';
+import type { ReactNode } from 'react';
 import { useQueryClient } from '@tanstack/react-query';
 import { useParams } from 'react-router-dom';
 import { ErrorPanel } from '../../../components/error-panel';
@@ -18,10 +19,12 @@ import type { SizedDeviceView } from '../model/sized-device';
 export interface DeviceRouteProps {
   /** Drawn under the results once the device is sized: the app passes the design charts. */
   charts?: SizedDeviceView;
+  /** A stored, sized device across corners and temperatures: the app passes the sheets' corner matrix. */
+  corners?: (device: { sheetId: string; deviceId: string }) => ReactNode;
 }
 
 /** The device page of a sheet: `/sheets/:sheetId/devices/:deviceId`, or `…/devices/new` to add one. */
-export default function DeviceRoute({ charts }: DeviceRouteProps = {}) {
+export default function DeviceRoute({ charts, corners }: DeviceRouteProps = {}) {
   const { sheetId = '', deviceId = 'new' } = useParams();
   const queryClient = useQueryClient();
   const sheet = useSheet(sheetId);
@@ -68,6 +71,14 @@ export default function DeviceRoute({ charts }: DeviceRouteProps = {}) {
       />
       <SheetConditions sheet={data} />
       <DeviceEditor key={device?.id ?? 'new'} sheet={data} process={profile.data.version.definition} device={device} initial={initial} editable={editable} reloadStored={reloadStored} charts={charts} />
+      {corners && device?.result && (
+        <Stack gap="xs" component="section" aria-label="Across corners">
+          <Title order={2} fz="md">
+            Across corners and temperatures (as stored)
+          </Title>
+          {corners({ sheetId: data.id, deviceId: device.id })}
+        </Stack>
+      )}
     </Stack>
   );
 }

@@ -1,3 +1,5 @@
+import { Button } from '@mantine/core';
+import { IconSend } from '@tabler/icons-react';
 import { useState } from 'react';
 import { ErrorPanel } from '../../../components/error-panel';
 import { PageHeader } from '../../../components/page-header';
@@ -6,6 +8,7 @@ import { useProcess } from '../../../lib/processes/process';
 import { useProcessProfiles } from '../../../lib/processes/process-profiles';
 import { DeviceWorkbench } from '../components/device-workbench';
 import { ProcessPicker } from '../components/process-picker';
+import { SendToSheetDialog } from '../components/send-to-sheet-dialog';
 import { useTargetsForm } from '../hooks/use-targets-form';
 import type { SizedDeviceView } from '../model/sized-device';
 
@@ -22,9 +25,20 @@ export default function ScratchDeviceRoute({ charts }: ScratchDeviceRouteProps =
   const summary = available.find((p) => p.id === chosenId) ?? available[0];
   const profile = useProcess(summary?.id, summary?.latestVersion);
   const { values, setField } = useTargetsForm();
+  const [sending, setSending] = useState(false);
 
   const header = (
-    <PageHeader title="Size a device" description="A scratch pad: results follow your typing and nothing is saved. Sheets keep sized devices." />
+    <PageHeader
+      title="Size a device"
+      description="A scratch pad: results follow your typing and nothing is saved. Sheets keep sized devices."
+      actions={
+        summary && (
+          <Button size="xs" variant="default" leftSection={<IconSend size={14} />} onClick={() => setSending(true)}>
+            Send to a sheet…
+          </Button>
+        )
+      }
+    />
   );
   if (profiles.isPending) return <>{header}<PageLoader label="Loading the process library" /></>;
   if (profiles.isError) return <>{header}<ErrorPanel title="The process library could not be loaded" message={profiles.error.message} onRetry={() => void profiles.refetch()} /></>;
@@ -43,6 +57,8 @@ export default function ScratchDeviceRoute({ charts }: ScratchDeviceRouteProps =
         formHeader={<ProcessPicker profiles={available} value={summary.id} onChange={setChosenId} />}
         charts={charts}
       />
+      {/* Mounted only while open: its project and sheet lists are fetched when the designer asks to send. */}
+      {sending && <SendToSheetDialog opened onClose={() => setSending(false)} values={values} processRef={{ processId: summary.id, processVersion: summary.latestVersion }} processName={summary.name} />}
     </>
   );
 }

@@ -3,7 +3,7 @@ import { useDisclosure } from '@mantine/hooks';
 import { IconFolders, IconPlus } from '@tabler/icons-react';
 import { ErrorPanel } from '../../../components/error-panel';
 import { PageLoader } from '../../../components/page-loader';
-import { useProjects } from '../api/get-projects';
+import { useProjects } from '../../../lib/projects/projects';
 import { NewProjectDialog } from './new-project-dialog';
 import { ProjectsTable } from './projects-table';
 

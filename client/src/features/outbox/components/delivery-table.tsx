@@ -1,5 +1,6 @@
 import type { OutboxMessage } from '@channelwright/shared/schemas';
 import { Badge, Table, Text } from '@mantine/core';
+import { formatDateTime } from '../../../lib/format-date';
 
 const STATE_COLOR = { queued: 'channel', sent: 'green', failed: 'red' } as const;
 
@@ -21,7 +22,7 @@ export function DeliveryTable({ messages }: { messages: OutboxMessage[] }) {
       <Table.Tbody>
         {messages.map((message) => (
           <Table.Tr key={message.id}>
-            <Table.Td style={{ whiteSpace: 'nowrap' }}>{new Date(message.createdAt).toLocaleString()}</Table.Td>
+            <Table.Td style={{ whiteSpace: 'nowrap' }}>{formatDateTime(message.createdAt)}</Table.Td>
             <Table.Td>{message.to}</Table.Td>
             <Table.Td>{message.subject}</Table.Td>
             <Table.Td>

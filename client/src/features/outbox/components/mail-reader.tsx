@@ -1,5 +1,6 @@
 import type { ReceivedMail } from '@channelwright/shared/schemas';
 import { Code, Modal, Stack, Tabs, Text } from '@mantine/core';
+import { formatDateTime } from '../../../lib/format-date';
 
 /** One received message: its headers, the plain-text part, and the HTML part in a sandboxed frame (no scripts, no links out). */
 export function MailReader({ mail, onClose }: { mail: ReceivedMail | null; onClose: () => void }) {
@@ -8,7 +9,7 @@ export function MailReader({ mail, onClose }: { mail: ReceivedMail | null; onClo
       {mail && (
         <Stack gap="xs">
           <Text size="sm">
-            <b>From</b> {mail.from} · <b>To</b> {mail.to.join(', ')} · {new Date(mail.receivedAt).toLocaleString()}
+            <b>From</b> {mail.from} · <b>To</b> {mail.to.join(', ')} · {formatDateTime(mail.receivedAt)}
           </Text>
           <Tabs defaultValue="text">
             <Tabs.List>
@@ -16,7 +17,7 @@ export function MailReader({ mail, onClose }: { mail: ReceivedMail | null; onClo
               <Tabs.Tab value="html">HTML</Tabs.Tab>
             </Tabs.List>
             <Tabs.Panel value="text" pt="xs">
-              <Code block aria-label="Plain-text part">
+              <Code block aria-label="Plain-text part" style={{ whiteSpace: 'pre-wrap', overflowWrap: 'anywhere' }}>
                 {mail.text}
               </Code>
             </Tabs.Panel>

@@ -1,5 +1,6 @@
 import type { ReceivedMail } from '@channelwright/shared/schemas';
 import { Anchor, Table, Text } from '@mantine/core';
+import { formatDateTime } from '../../../lib/format-date';
 
 /** Received messages, newest first; opening one shows its parts. */
 export function ReceivedMailTable({ mails, label, onOpen }: { mails: ReceivedMail[]; label: string; onOpen: (mail: ReceivedMail) => void }) {
@@ -16,7 +17,7 @@ export function ReceivedMailTable({ mails, label, onOpen }: { mails: ReceivedMai
       <Table.Tbody>
         {mails.map((mail) => (
           <Table.Tr key={mail.id}>
-            <Table.Td style={{ whiteSpace: 'nowrap' }}>{new Date(mail.receivedAt).toLocaleString()}</Table.Td>
+            <Table.Td style={{ whiteSpace: 'nowrap' }}>{formatDateTime(mail.receivedAt)}</Table.Td>
             <Table.Td>{mail.to.join(', ')}</Table.Td>
             <Table.Td>
               <Anchor component="button" type="button" size="sm" onClick={() => onOpen(mail)}>

@@ -15,7 +15,7 @@ const DERIVED = {
   constants: [{ symbol: 'ni(300 K)', name: 'intrinsic carrier density', value: 1e16, unit: 'm⁻³', source: 'Sproul & Green 1991' }],
 };
 
-function fakeLibrary(onPut: (body: UpdateProcessRequest) => FakeResponse = (body) => ({ body: { ...bf180(), latestVersion: 2, version: { ...versionOf('p-bf180', 2), definition: body.definition } } })) {
+function fakeLibrary(onPut: (body: UpdateProcessRequest) => FakeResponse = (body) => ({ body: { ...bf180(), latestVersion: 2, version: { ...versionOf('p-bf180', 2), definition: body.definition, modelCard: null } } })) {
   return installFakeApi({
     'GET /api/config': { body: demoConfig },
     'GET /api/auth/me': { body: admin },
@@ -34,7 +34,7 @@ async function openEditor() {
 }
 
 // The editor renders some sixty fields; jsdom on a busy two-core machine needs more than the default 5 s for some tests.
-describe('the process editor', { timeout: 20_000 }, () => {
+describe('the process editor', { timeout: 60_000 }, () => {
   it('starts from the stored numbers, each in its display unit', async () => {
     fakeLibrary();
     const { nmos } = await openEditor();

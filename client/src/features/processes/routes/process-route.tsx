@@ -77,7 +77,7 @@ export default function ProcessRoute() {
           <ProfileSummary profile={data} />
         </Paper>
         <Grid gap="lg">
-          <Grid.Col span={{ base: 12, lg: 7 }}>
+          <Grid.Col span={{ base: 12, xl: 7 }}>
             <Section title="Device parameters">
               <ParametersTable caption="Device parameters" columns={[{ label: 'NMOS', params: definition.nmos }, { label: 'PMOS', params: definition.pmos }]} />
               <Text size="xs" c="dimmed" mt={4}>
@@ -85,10 +85,19 @@ export default function ProcessRoute() {
               </Text>
             </Section>
           </Grid.Col>
-          <Grid.Col span={{ base: 12, lg: 5 }}>
+          <Grid.Col span={{ base: 12, xl: 5 }}>
             <Stack gap="lg">
               <Section title="Corners">
                 <CornersTable process={definition} />
+              </Section>
+              <Section title="SPICE model names">
+                <Text size="sm">
+                  NMOS {definition.spiceModels?.nmos ?? '—'} · PMOS {definition.spiceModels?.pmos ?? '—'}
+                  {Object.entries(definition.spiceModels?.flavours ?? {}).map(([flavour, model]) => ` · ${flavour} ${model}`).join('')}
+                </Text>
+                <Text size="xs" c="dimmed">
+                  {definition.spiceModels ? 'The names a sheet\'s SPICE export gives each device type.' : 'None set: a sheet\'s SPICE export names them after the process (give them in the process file, spiceModels).'}
+                </Text>
               </Section>
               {(definition.flavours ?? []).map((flavour) => (
                 <Section key={flavour.name} title={`Flavour ${flavour.name}`}>

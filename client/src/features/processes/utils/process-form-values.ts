@@ -7,6 +7,7 @@ import {
   type ParameterInfo,
   type Polarity,
   type Process,
+  type SpiceModels,
 } from '@channelwright/shared/schemas';
 import { parseQuantity } from '@channelwright/shared/units';
 import { editableQuantity } from './display-quantity';
@@ -38,6 +39,8 @@ export interface ProcessFormValues {
   pmos: DeviceText;
   corners: CornerFormValues[];
   flavours: Flavour[];
+  /** Carried through an edit unchanged (set in the process file). */
+  spiceModels?: SpiceModels;
 }
 
 const info = (name: string): ParameterInfo => parameterInfo(name)!;
@@ -73,6 +76,7 @@ export function toFormValues(process: Process, nodeClass: string): ProcessFormVa
     pmos: deviceText(process.pmos),
     corners: process.corners.map(cornerText),
     flavours: process.flavours ?? [],
+    ...(process.spiceModels ? { spiceModels: process.spiceModels } : {}),
   };
 }
 
@@ -128,6 +132,7 @@ export function readFormValues(values: ProcessFormValues): FormReading {
       ),
     })),
     ...(values.flavours.length > 0 && { flavours: values.flavours }),
+    ...(values.spiceModels && { spiceModels: values.spiceModels }),
   };
   return { candidate, textErrors };
 }

@@ -44,10 +44,11 @@ export function MembersPanel({ projectId, manage, currentUserId }: MembersPanelP
                   {member.email}
                 </Text>
               </Table.Td>
-              <Table.Td w={150}>
+              <Table.Td w={170}>
                 {manage ? (
                   <Select
                     size="xs"
+                    w={160}
                     aria-label={`Role of ${member.displayName}`}
                     data={PROJECT_ROLES.map((role) => ({ value: role, label: ROLE_LABELS[role] }))}
                     value={member.role}

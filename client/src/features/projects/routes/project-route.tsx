@@ -8,7 +8,7 @@ import { PageLoader } from '../../../components/page-loader';
 import { useProject } from '../../../lib/projects/project';
 import { canEditSheets, canManageMembers } from '../../../lib/projects/project-permissions';
 import { useSignedInUser } from '../../../lib/session/current-user';
-import { useProjectSheets } from '../api/get-project-sheets';
+import { useProjectSheets } from '../../../lib/sheets/project-sheets';
 import { MembersPanel } from '../components/members-panel';
 import { NewSheetDialog } from '../components/new-sheet-dialog';
 import { ROLE_LABELS } from '../components/role-labels';
@@ -56,7 +56,7 @@ export default function ProjectRoute() {
         }
       />
       <Grid gap="sm" align="flex-start">
-        <Grid.Col span={{ base: 12, lg: 8 }}>
+        <Grid.Col span={{ base: 12, xl: 8 }}>
           <Paper withBorder radius="sm" p="sm" component="section" aria-labelledby="sheets-title">
             <Stack gap="xs">
               <Group justify="space-between">
@@ -73,7 +73,7 @@ export default function ProjectRoute() {
             </Stack>
           </Paper>
         </Grid.Col>
-        <Grid.Col span={{ base: 12, lg: 4 }}>
+        <Grid.Col span={{ base: 12, xl: 4 }}>
           <MembersPanel projectId={projectId} manage={canManageMembers(data, user)} currentUserId={user.id} />
         </Grid.Col>
       </Grid>

@@ -1,6 +1,7 @@
 import type { ReviewRequest } from '@channelwright/shared/schemas';
 import { Anchor, Badge, Table, Text } from '@mantine/core';
 import { Link } from 'react-router-dom';
+import { formatDay } from '../../../lib/format-date';
 
 const OUTCOME: Record<ReviewRequest['state'], { label: string; color: string }> = {
   open: { label: 'Waiting', color: 'channel' },
@@ -12,6 +13,7 @@ const OUTCOME: Record<ReviewRequest['state'], { label: string; color: string }> 
 /** Review requests with the revision they are about, who asked whom, and where each stands. */
 export function ReviewInboxTable({ requests, label }: { requests: ReviewRequest[]; label: string }) {
   return (
+    <Table.ScrollContainer minWidth={900}>
     <Table aria-label={label} striped highlightOnHover fz="sm" verticalSpacing={6}>
       <Table.Thead>
         <Table.Tr>
@@ -37,9 +39,9 @@ export function ReviewInboxTable({ requests, label }: { requests: ReviewRequest[
             <Table.Td>{request.projectName}</Table.Td>
             <Table.Td>{request.requestedBy?.displayName ?? '—'}</Table.Td>
             <Table.Td>{request.reviewer?.displayName ?? '—'}</Table.Td>
-            <Table.Td>{new Date(request.createdAt).toLocaleDateString()}</Table.Td>
-            <Table.Td>
-              <Badge color={OUTCOME[request.state].color} variant="light" tt="none">
+            <Table.Td style={{ whiteSpace: 'nowrap' }}>{formatDay(request.createdAt)}</Table.Td>
+            <Table.Td style={{ whiteSpace: 'nowrap' }}>
+              <Badge color={OUTCOME[request.state].color} variant="light" tt="none" style={{ overflow: 'visible' }}>
                 {OUTCOME[request.state].label}
               </Badge>
             </Table.Td>
@@ -47,5 +49,6 @@ export function ReviewInboxTable({ requests, label }: { requests: ReviewRequest[
         ))}
       </Table.Tbody>
     </Table>
+    </Table.ScrollContainer>
   );
 }

@@ -8,6 +8,6 @@ export const getSheetReviewState = (sheetId: string, signal?: AbortSignal): Prom
   apiRequest(`/sheets/${encodeURIComponent(sheetId)}/review-state`, { schema: sheetReviewStateSchema, signal });
 
 export const sheetReviewStateQueryOptions = (sheetId: string) =>
-  queryOptions({ queryKey: revisionKeys.sheetState(sheetId), queryFn: ({ signal }) => getSheetReviewState(sheetId, signal) });
+  queryOptions({ queryKey: revisionKeys.sheetState(sheetId), queryFn: ({ signal }) => getSheetReviewState(sheetId, signal), enabled: sheetId !== '' });
 
 export const useSheetReviewState = (sheetId: string) => useQuery(sheetReviewStateQueryOptions(sheetId));

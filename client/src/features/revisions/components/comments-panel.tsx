@@ -2,6 +2,7 @@ import type { RevisionDevice } from '@channelwright/shared/schemas';
 import { Alert, Badge, Button, Group, Paper, Select, Stack, Text, Textarea } from '@mantine/core';
 import { useAddRevisionComment } from '../api/add-revision-comment';
 import { useRevisionComments } from '../api/get-revision-comments';
+import { formatDateTime } from '../../../lib/format-date';
 
 const WHOLE = '';
 
@@ -37,7 +38,7 @@ export function CommentsPanel({ revisionId, devices, canComment, target, onTarge
             <Group gap={6} mb={2}>
               <Text size="sm" fw={600}>{comment.author?.displayName ?? 'someone'}</Text>
               <Badge size="sm" variant="outline" color="gray" tt="none">{comment.device ? comment.device.name : 'whole revision'}</Badge>
-              <Text size="xs" c="dimmed">{new Date(comment.createdAt).toLocaleString()}</Text>
+              <Text size="xs" c="dimmed">{formatDateTime(comment.createdAt)}</Text>
             </Group>
             <Text size="sm" style={{ whiteSpace: 'pre-wrap' }}>{comment.body}</Text>
           </Paper>

@@ -4,6 +4,7 @@ import { useState } from 'react';
 import { useSignedInUser } from '../../../lib/session/current-user';
 import { useDecideReviewRequest } from '../api/decide-review-request';
 import { useWithdrawReviewRequest } from '../api/withdraw-review-request';
+import { formatDateTime } from '../../../lib/format-date';
 
 const OUTCOME: Record<ReviewRequest['state'], { label: string; color: string }> = {
   open: { label: 'Open', color: 'channel' },
@@ -50,7 +51,7 @@ export function DecisionPanel({ requests }: { requests: ReviewRequest[] }) {
                   {request.requestedBy?.displayName ?? 'Someone'} asked <b>{request.reviewer?.displayName ?? 'a reviewer'}</b>
                 </Text>
                 <Badge color={outcome.color} variant="light" tt="none">{outcome.label}</Badge>
-                <Text size="xs" c="dimmed">{new Date(request.createdAt).toLocaleString()}</Text>
+                <Text size="xs" c="dimmed">{formatDateTime(request.createdAt)}</Text>
               </Group>
               {request.note && <Text size="sm" c="dimmed">Note: {request.note}</Text>}
               {request.decisionComment && <Text size="sm">Decision: {request.decisionComment}</Text>}

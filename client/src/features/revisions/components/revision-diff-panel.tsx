@@ -1,7 +1,9 @@
-import type { RevisionDiff, ValueChange } from '@channelwright/shared/schemas';
-import { Badge, Group, Skeleton, Stack, Table, Text } from '@mantine/core';
+import type { RevisionDiff, RevisionSummary, ValueChange } from '@channelwright/shared/schemas';
+import { Badge, Group, Select, Skeleton, Stack, Table, Text } from '@mantine/core';
+import { useState } from 'react';
 import { useRevisionDiff } from '../api/get-revision-diff';
 import { formatValue } from '../model/format-value';
+import { REVISION_STATE_LOOK } from '../model/revision-state-look';
 
 function ChangesTable({ label, changes }: { label: string; changes: ValueChange[] }) {
   return (
@@ -48,16 +50,37 @@ function DiffBody({ diff }: { diff: RevisionDiff }) {
   );
 }
 
-/** What changed since the sheet's last signed-off revision (or says there is none to compare with). */
-export function RevisionDiffPanel({ revisionId }: { revisionId: string }) {
-  const diff = useRevisionDiff(revisionId);
-  if (diff.isPending) return <Skeleton height={60} />;
-  if (diff.isError) return <Text size="sm" c="red">The comparison could not be loaded: {diff.error.message}</Text>;
-  if (diff.data.againstId === null) return <Text size="sm" c="dimmed">No earlier signed-off revision of this sheet to compare with: everything here is new to review.</Text>;
+const LAST_SIGNED_OFF = 'last-signed-off';
+
+interface RevisionDiffPanelProps {
+  revisionId: string;
+  /** The sheet's earlier revisions (any state, rejected ones too), newest first, to compare with. */
+  earlier: RevisionSummary[];
+}
+
+/** What changed since the last signed-off revision, or since any earlier revision the reader picks. */
+export function RevisionDiffPanel({ revisionId, earlier }: RevisionDiffPanelProps) {
+  const [against, setAgainst] = useState(LAST_SIGNED_OFF);
+  const diff = useRevisionDiff(revisionId, against === LAST_SIGNED_OFF ? undefined : against);
+  const choices = [
+    { value: LAST_SIGNED_OFF, label: 'the last signed-off revision' },
+    ...earlier.map((r) => ({ value: r.id, label: `${r.label} (${REVISION_STATE_LOOK[r.state].label.toLowerCase()}) — ${r.message}` })),
+  ];
   return (
     <Stack gap="xs">
-      <Text size="sm" c="dimmed">Compared with {diff.data.againstLabel}, the last signed-off revision.</Text>
-      <DiffBody diff={diff.data} />
+      <Select label="Compare with" size="xs" maw={520} data={choices} value={against} onChange={(value) => setAgainst(value ?? LAST_SIGNED_OFF)} allowDeselect={false} />
+      {diff.isPending ? (
+        <Skeleton height={60} />
+      ) : diff.isError ? (
+        <Text size="sm" c="red">The comparison could not be loaded: {diff.error.message}</Text>
+      ) : diff.data.againstId === null ? (
+        <Text size="sm" c="dimmed">No earlier signed-off revision of this sheet to compare with: everything here is new to review. Pick an earlier revision above to compare with it.</Text>
+      ) : (
+        <Stack gap="xs">
+          <Text size="sm" c="dimmed">Compared with {diff.data.againstLabel}{against === LAST_SIGNED_OFF ? ', the last signed-off revision' : ''}.</Text>
+          <DiffBody diff={diff.data} />
+        </Stack>
+      )}
     </Stack>
   );
 }

@@ -2,8 +2,7 @@ import type { RevisionSummary } from '@channelwright/shared/schemas';
 import { Anchor, Group, Stack, Text } from '@mantine/core';
 import { Link } from 'react-router-dom';
 import { RevisionStateBadge } from './revision-state-badge';
-
-const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+import { formatDateTime } from '../../../lib/format-date';
 
 /** The sheet's revisions, newest first, each with its state and a link to its page. */
 export function RevisionHistory({ revisions }: { revisions: RevisionSummary[] }) {
@@ -20,7 +19,7 @@ export function RevisionHistory({ revisions }: { revisions: RevisionSummary[] })
             {revision.message}
           </Text>
           <Text size="xs" c="dimmed" style={{ whiteSpace: 'nowrap' }}>
-            {revision.author?.displayName ?? 'someone'} · {when(revision.createdAt)}
+            {revision.author?.displayName ?? 'someone'} · {formatDateTime(revision.createdAt)}
           </Text>
         </Group>
       ))}

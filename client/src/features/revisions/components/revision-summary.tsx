@@ -3,8 +3,7 @@ import { Alert, Code, Group, Paper, SimpleGrid, Stack, Text } from '@mantine/cor
 import { IconAlertOctagon, IconLock, IconRosetteDiscountCheck } from '@tabler/icons-react';
 import { useVerifyRevision } from '../api/verify-revision';
 import { HashCheck } from './hash-check';
-
-const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+import { formatDateTime } from '../../../lib/format-date';
 
 function Fact({ label, children }: { label: string; children: React.ReactNode }) {
   return (
@@ -32,7 +31,7 @@ export function RevisionSummary({ revision }: { revision: Revision }) {
       <Paper withBorder radius="sm" p="sm">
         <SimpleGrid cols={{ base: 2, md: 4 }} spacing="sm">
           <Fact label="Frozen by">{revision.author?.displayName ?? '—'}</Fact>
-          <Fact label="Frozen on">{when(revision.createdAt)}</Fact>
+          <Fact label="Frozen on">{formatDateTime(revision.createdAt)}</Fact>
           <Fact label="Process">
             {revision.process.name} v{revision.process.version}
           </Fact>
@@ -57,7 +56,7 @@ export function RevisionSummary({ revision }: { revision: Revision }) {
         <Alert color="green" variant="light" icon={<IconRosetteDiscountCheck size={18} />} title={`Signed off by ${signOff.by?.displayName ?? 'a reviewer'}`}>
           <Stack gap={4}>
             <Text size="sm">
-              On {when(signOff.at)}, with hash <Code>{signOff.hash.slice(0, 16)}…</Code>. This revision can never change; edit the sheet and freeze a new revision
+              On {formatDateTime(signOff.at)}, with hash <Code>{signOff.hash.slice(0, 16)}…</Code>. This revision can never change; edit the sheet and freeze a new revision
               for further work.
             </Text>
           </Stack>

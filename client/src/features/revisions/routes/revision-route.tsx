@@ -8,6 +8,7 @@ import { RegionErrorBoundary } from '../../../components/region-error-boundary';
 import { useProject } from '../../../lib/projects/project';
 import { useReviewRequests } from '../api/get-review-requests';
 import { useRevision } from '../api/get-revision';
+import { useSheetReviewState } from '../api/get-sheet-review-state';
 import { CommentsPanel } from '../components/comments-panel';
 import { DecisionPanel } from '../components/decision-panel';
 import { RevisionDeviceTable } from '../components/revision-device-table';
@@ -36,6 +37,7 @@ export default function RevisionRoute() {
   const revision = useRevision(revisionId);
   const requests = useReviewRequests(revisionId);
   const project = useProject(revision.data?.projectId);
+  const history = useSheetReviewState(revision.data?.sheetId ?? '');
   const [commentTarget, setCommentTarget] = useState('');
   const [commentBody, setCommentBody] = useState('');
 
@@ -65,12 +67,12 @@ export default function RevisionRoute() {
       <Section title="Review">
         {requests.isError ? <ErrorPanel title="The review requests could not be loaded" message={requests.error.message} /> : <DecisionPanel requests={requests.data ?? []} />}
       </Section>
-      <Section title="Changes since the last sign-off">
-        <RevisionDiffPanel revisionId={data.id} />
+      <Section title="Changes">
+        <RevisionDiffPanel revisionId={data.id} earlier={(history.data?.revisions ?? []).filter((r) => r.number < data.number)} />
       </Section>
       <Section title="Devices">
         <Paper withBorder radius="sm" p={0}>
-          <RevisionDeviceTable devices={data.devices} onComment={canComment ? (device) => setCommentTarget(device.id) : undefined} />
+          <RevisionDeviceTable devices={data.devices} deviceHref={(device) => `/revisions/${data.id}/devices/${device.id}`} onComment={canComment ? (device) => setCommentTarget(device.id) : undefined} />
         </Paper>
         <RevisionWarnings devices={data.devices} />
       </Section>

@@ -133,11 +133,12 @@ describe('the sheet page', { timeout: 20_000 }, () => {
   });
 
   it('says when results are stale and lets a designer recompute the sheet', async () => {
-    const api = fakeServer({ devices: [{ ...input, stale: true, staleReasons: ['process'] }, second] });
+    const api = fakeServer({ devices: [{ ...input, stale: true, staleReasons: ['process'], computedWith: { ...input.computedWith, processVersionId: 'v-bf180g-1', processVersion: 1 } }, second] });
     const { user } = await openSheet();
 
     const banner = (await screen.findByText('Some results are out of date')).closest('[role="alert"]') as HTMLElement;
-    expect(banner).toHaveTextContent('1 of 2 devices were computed with another version of BF180-G');
+    expect(banner).toHaveTextContent('1 of 2 devices were computed with BF180-G v1 (the sheet is now on BF180-G v2)');
+    expect(banner).toHaveTextContent('would give now: M1.');
     await user.click(within(banner).getByRole('button', { name: 'Recompute the sheet' }));
 
     await waitFor(() => expect(api.to('POST /api/sheets/s-amp/recompute')).toHaveLength(1));

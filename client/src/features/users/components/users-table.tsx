@@ -1,6 +1,7 @@
 import type { GlobalRole, User } from '@channelwright/shared/schemas';
 import { Badge, Group, Select, Switch, Table, Text, Tooltip } from '@mantine/core';
 import type { UpdateUserInput } from '../api/update-user';
+import { formatDay } from '../../../lib/format-date';
 
 interface UsersTableProps {
   users: User[];
@@ -16,7 +17,6 @@ const ROLE_OPTIONS: { value: GlobalRole; label: string }[] = [
   { value: 'admin', label: 'Administrator' },
 ];
 
-const dateFormat = new Intl.DateTimeFormat('en-GB', { year: 'numeric', month: 'short', day: 'numeric' });
 
 function SelfGuard({ isSelf, children }: { isSelf: boolean; children: React.ReactElement }) {
   if (!isSelf) return children;
@@ -100,7 +100,7 @@ export function UsersTable({ users, currentUserId, onChange, pendingUserId }: Us
         </Table.Td>
         <Table.Td>
           <Text size="sm" c="dimmed">
-            {dateFormat.format(new Date(user.createdAt))}
+            {formatDay(user.createdAt)}
           </Text>
         </Table.Td>
       </Table.Tr>

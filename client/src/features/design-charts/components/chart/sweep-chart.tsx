@@ -15,7 +15,7 @@ import type { ChartData } from '../../model/chart-series';
 import { makeReadout } from './chart-readout';
 import classes from './sweep-chart.module.css';
 import { linearAxisFor, linearTicks } from '../../model/linear-ticks';
-import { logAxisFor } from '../../model/log-axis';
+import { logAxisFor } from '../../../../lib/charts/log-axis';
 import { formatTick } from '../../model/tick-format';
 
 export interface AxisSpec {

@@ -1,7 +1,7 @@
 import { projectListSchema, type ProjectList } from '@channelwright/shared/schemas';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
-import { projectKeys } from '../../../lib/projects/project-keys';
+import { apiRequest } from '../api-client';
+import { projectKeys } from './project-keys';
 
 /** `GET /api/projects`: the projects the user belongs to (every project for administrators). */
 export const getProjects = (signal?: AbortSignal): Promise<ProjectList> =>

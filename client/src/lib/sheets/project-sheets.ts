@@ -1,7 +1,7 @@
 import { sheetListSchema, type SheetList } from '@channelwright/shared/schemas';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
-import { sheetKeys } from '../../../lib/sheets/sheet-keys';
+import { apiRequest } from '../api-client';
+import { sheetKeys } from './sheet-keys';
 
 /** `GET /api/projects/:id/sheets`: the project's sheets, by name, with their device and stale counts. */
 export const getProjectSheets = (projectId: string, signal?: AbortSignal): Promise<SheetList> =>
@@ -9,6 +9,6 @@ export const getProjectSheets = (projectId: string, signal?: AbortSignal): Promi
 
 /** Under the sheets' keys, so every change to a device (which moves these counts) refreshes it. */
 export const projectSheetsQueryOptions = (projectId: string) =>
-  queryOptions({ queryKey: sheetKeys.list(projectId), queryFn: ({ signal }) => getProjectSheets(projectId, signal) });
+  queryOptions({ queryKey: sheetKeys.list(projectId), queryFn: ({ signal }) => getProjectSheets(projectId, signal), enabled: projectId !== '' });
 
 export const useProjectSheets = (projectId: string) => useQuery(projectSheetsQueryOptions(projectId));

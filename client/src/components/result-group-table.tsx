@@ -1,10 +1,10 @@
 import { Paper, Table, Text, Title } from '@mantine/core';
-import { Quantity } from '../../../components/quantity';
-import type { ResultGroup } from '../model/result-groups';
+import { Quantity } from './quantity';
+import type { ResultGroup } from '../lib/results/result-groups';
 
 /** One group of results as a table: the symbol (its meaning on hover) and the value right-aligned with its unit. */
-export function ResultGroupTable({ group }: { group: ResultGroup }) {
-  const titleId = `result-group-${group.title.toLowerCase().replace(/\W+/g, '-')}`;
+export function ResultGroupTable({ group, idPrefix = '' }: { group: ResultGroup; /** Keeps ids unique when several devices' groups share a page. */ idPrefix?: string }) {
+  const titleId = `result-group-${idPrefix}${group.title.toLowerCase().replace(/\W+/g, '-')}`;
   return (
     <Paper withBorder radius="sm" p="xs">
       <Title order={3} fz="xs" tt="uppercase" c="dimmed" lts={0.4} fw={600} px={6} pb={4} id={titleId}>
