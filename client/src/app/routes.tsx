@@ -30,6 +30,7 @@ export const shellRoutes: ShellRoute[] = [
   { path: '/processes', page: () => import('../features/processes/routes/processes-route'), nav: { label: 'Processes', icon: IconCpu } },
   { path: '/processes/new', page: () => import('../features/processes/routes/process-new-route'), access: canMaintainProcesses },
   { path: '/processes/:id', page: () => import('./pages/process-page') },
+  { path: '/processes/:id/design-charts', page: () => import('../features/design-charts/routes/gm-id-charts-route') },
   { path: '/processes/:id/edit', page: () => import('../features/processes/routes/process-edit-route'), access: canMaintainProcesses },
   { path: '/workbench', page: () => import('./pages/scratch-device-page'), nav: { label: 'Size a device', icon: IconRuler2 } },
   { path: '/projects/:projectId', page: () => import('../features/projects/routes/project-route') },

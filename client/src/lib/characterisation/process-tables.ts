@@ -18,5 +18,11 @@ export const processTablesQueryOptions = (processId: string, version: number) =>
 export const useProcessTables = (processId: string | undefined, version: number | undefined) =>
   useQuery({ ...processTablesQueryOptions(processId ?? '', version ?? 0), enabled: Boolean(processId) && version !== undefined && version > 0 });
 
-/** The tables the table model uses: one per device (polarity and flavour). */
-export const currentTables = (tables: CharacterisationTable[] | undefined): CharacterisationTable[] => (tables ?? []).filter((table) => table.current);
+type Device = { polarity: string; flavour?: string | null };
+
+/** NMOS, then PMOS, then the flavours by name: the order devices are listed and offered in (the standard device first). */
+export const byDevice = (a: Device, b: Device): number =>
+  Number(Boolean(a.flavour)) - Number(Boolean(b.flavour)) || a.polarity.localeCompare(b.polarity) || (a.flavour ?? '').localeCompare(b.flavour ?? '');
+
+/** The tables the table model uses, one per device (polarity and flavour), in device order. */
+export const currentTables = (tables: CharacterisationTable[] | undefined): CharacterisationTable[] => (tables ?? []).filter((table) => table.current).sort(byDevice);

@@ -1,12 +1,12 @@
 import type { ProcessProfile } from '@channelwright/shared/schemas';
 import { formatQuantity } from '@channelwright/shared/units';
-import { Alert, Anchor, Badge, Button, Group, Stack, Text } from '@mantine/core';
+import { Alert, Anchor, Button, Group, Stack, Text } from '@mantine/core';
 import { useQueryClient } from '@tanstack/react-query';
 import { useEffect, useMemo, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { PageLoader } from '../../../components/page-loader';
 import { characterisationKeys } from '../../../lib/characterisation/characterisation-keys';
-import { useProcessTables } from '../../../lib/characterisation/process-tables';
+import { byDevice, useProcessTables } from '../../../lib/characterisation/process-tables';
 import { useCancelCharacterisation } from '../api/cancel-characterisation';
 import { useCharacterisations } from '../api/get-characterisations';
 import { useStartCharacterisation } from '../api/start-characterisation';
@@ -21,13 +21,21 @@ interface CharacterisationPanelProps {
   maintainer: boolean;
 }
 
-function StartCharacterisation({ profile }: { profile: ProcessProfile }) {
+function StartCharacterisation({ profile, doneTotal }: { profile: ProcessProfile; doneTotal: number | null }) {
   const { id, version } = { id: profile.id, version: profile.version.number };
   const card = profile.version.modelCard;
   const [open, setOpen] = useState(false);
   const start = useStartCharacterisation(id, version);
   const preview = useMemo(() => (card ? defaultGridPreview(profile.version.definition, card.mapping) : []), [profile, card]);
   const total = preview.reduce((sum, device) => sum + device.points, 0);
+  // The same version and grid are characterised once: the default grid done already has nothing to start.
+  if (doneTotal === total) {
+    return (
+      <Text size="xs" c="dimmed">
+        Characterised over the default grid. A new card (a new version) is characterised anew.
+      </Text>
+    );
+  }
   return (
     <Stack gap="xs">
       <Group gap="xs">
@@ -83,16 +91,16 @@ export function CharacterisationPanel({ profile, maintainer }: CharacterisationP
   if (jobs.isError) return <Alert color="red" variant="light" title="The characterisations could not be loaded">{jobs.error.message}</Alert>;
 
   const underway = latest !== undefined && isUnderway(latest.status);
-  const rows: GridRow[] = (tables.data ?? []).map((table) => ({
+  const rows: GridRow[] = [...(tables.data ?? [])].sort((a, b) => Number(b.current) - Number(a.current) || byDevice(a, b)).map((table) => ({
     key: table.id,
     label: deviceLabel(table.polarity, table.flavour),
     model: table.model,
     grid: table.grid,
     points: table.points,
     note: table.current ? (
-      <Badge size="sm" variant="light" color="teal" tt="none">
+      <Text size="xs" c="teal" fw={600} style={{ whiteSpace: 'nowrap' }}>
         in use
-      </Badge>
+      </Text>
     ) : (
       <Text size="xs" c="dimmed">
         older
@@ -109,7 +117,7 @@ export function CharacterisationPanel({ profile, maintainer }: CharacterisationP
           This version has not been characterised yet.
         </Text>
       )}
-      {maintainer && !underway && <StartCharacterisation profile={profile} />}
+      {maintainer && !underway && <StartCharacterisation profile={profile} doneTotal={latest?.status === 'done' ? latest.progress.total : null} />}
       {rows.length > 0 && (
         <Stack gap={4}>
           <Group justify="space-between">

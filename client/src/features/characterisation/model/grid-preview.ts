@@ -1,4 +1,5 @@
 import { defaultTableGrid, deviceParamsOf, tablePointCount } from '@channelwright/shared/device';
+import { byDevice } from '../../../lib/characterisation/process-tables';
 import { cornerNames, type ModelCardMapping, type Process, type TableGridResponse } from '@channelwright/shared/schemas';
 
 /** One device's grid as a characterisation would simulate it. */
@@ -23,7 +24,7 @@ export const deviceLabel = (polarity: 'nmos' | 'pmos', flavour: string | null | 
 export function defaultGridPreview(definition: Process, mapping: ModelCardMapping): DeviceGrid[] {
   const corners = cornerNames(definition).filter((corner) => corner in mapping.corners);
   const temperatures = definition.tempRange ? [definition.tempRange.min, definition.tnom, definition.tempRange.max] : [definition.tnom];
-  return mapping.devices.map((device) => {
+  return [...mapping.devices].sort(byDevice).map((device) => {
     const params = deviceParamsOf(definition, device.polarity, device.flavour);
     const step = 0.01;
     const vgsFrom = params.vt0 < 0 ? Number((Math.floor((params.vt0 - DEPLETION_MARGIN) / step) * step).toPrecision(12)) : 0;
