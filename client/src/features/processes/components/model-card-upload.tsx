@@ -1,5 +1,5 @@
 import '@mantine/dropzone/styles.css';
-import { cornerNames, MODEL_CARD_MAX_BYTES, type ModelCardProblem, type ProcessProfile } from '@channelwright/shared/schemas';
+import { cornerNames, MODEL_CARD_MAX_BYTES, type ProcessProfile, type Problem } from '@channelwright/shared/schemas';
 import { Alert, Button, Group, Stack, Text, TextInput } from '@mantine/core';
 import { Dropzone } from '@mantine/dropzone';
 import { IconFileUpload } from '@tabler/icons-react';
@@ -8,7 +8,7 @@ import { isApiError } from '../../../lib/api-error';
 import { useCheckModelCard } from '../api/check-model-card';
 import { useImportProcess } from '../api/import-process';
 import { CardMappingTables } from './card-mapping-tables';
-import { CardProblemsList } from './card-problems-list';
+import { ImportProblemsList } from './import-problems-list';
 
 const CARD_EXTENSIONS = ['.lib', '.l', '.mod', '.model', '.sp', '.spi', '.spice', '.cir', '.txt', '.mdl', '.inc'];
 const MAX_MB = MODEL_CARD_MAX_BYTES / 1024 / 1024;
@@ -19,11 +19,8 @@ interface ModelCardUploadProps {
   onUploaded: (profile: ProcessProfile) => void;
 }
 
-/** The server's refusal of an upload, as card problems: a card's by line, a mapping's by entry. */
-function problemsOf(error: unknown): ModelCardProblem[] {
-  if (!isApiError(error)) return [];
-  return (error.problems ?? []).map((p) => ({ line: p.row, field: p.field ?? 'card', message: p.message }));
-}
+/** The server's refusal of an upload: a card's problems by line, a mapping's by entry. */
+const problemsOf = (error: unknown): Problem[] => (isApiError(error) ? (error.problems ?? []) : []);
 
 /**
  * A SPICE model card as the next version of a profile: checked by the server first (nothing stored), which lists every
@@ -36,7 +33,7 @@ export function ModelCardUpload({ profile, onUploaded }: ModelCardUploadProps) {
   const upload = useImportProcess();
   const nextVersion = profile.latestVersion + 1;
   const checked = check.data;
-  const problems = checked ? checked.problems : problemsOf(upload.error);
+  const problems: Problem[] = checked ? checked.problems.map((p) => ({ row: p.line, field: p.field, message: p.message })) : problemsOf(upload.error);
 
   const choose = (files: File[]) => {
     const [chosen] = files;
@@ -86,15 +83,21 @@ export function ModelCardUpload({ profile, onUploaded }: ModelCardUploadProps) {
           <Alert color="red" variant="light" title={`${file?.name ?? 'The card'} cannot be used as it is`}>
             {problems.length === 1 ? 'One problem' : `${problems.length} problems`}; nothing was stored. Correct the card and choose it again.
           </Alert>
-          <CardProblemsList problems={problems} />
+          <ImportProblemsList problems={problems} caption="Problems in the model card" rowLabel="Line" withField={problems.some((p) => p.field !== undefined && p.field !== 'card')} />
         </Stack>
       )}
-      {checked?.ok && checked.card && (
+      {checked?.card && (
         <Stack gap="xs">
           <Text size="sm">
-            The card reads cleanly. Its mapping, guessed from the section and model names, is the one stored with v{nextVersion}:
+            {checked.ok
+              ? `The card reads cleanly. Its mapping, guessed from the section and model names, is the one stored with v${nextVersion}:`
+              : 'The mapping guessed from the section and model names does not fit this process: name the sections after the corners (tt, ff, ss …) and the models after the devices, then choose the card again.'}
           </Text>
           <CardMappingTables card={checked.card} corners={cornerNames(profile.version.definition)} />
+        </Stack>
+      )}
+      {checked?.ok && (
+        <Stack gap="xs">
           <TextInput label="What changed" placeholder={`Model card ${file?.name ?? ''}`} value={message} onChange={(event) => setMessage(event.currentTarget.value)} maxLength={500} />
           {upload.error && problemsOf(upload.error).length === 0 && (
             <Alert color="red" variant="light" title="The upload failed">
