@@ -11,8 +11,14 @@ const FIGURE_WORDS: Record<string, string> = {
   sigmaBeta: 'σ(Δβ/β)',
   sigmaId: 'σ(ΔID/ID)',
   sigmaVos: 'σ(VOS)',
+  ioff: 'Ioff',
+  ion: 'Ion',
+  ionIoff: 'Ion/Ioff',
   'leakage.gate': 'gate leakage',
   'leakage.junction': 'junction leakage',
+  'leakage.subthreshold': 'subthreshold leakage',
+  'leakage.idAtZeroVgs': 'ID at VGS = 0',
+  'leakage.gidl': 'GIDL',
 };
 
 const BASIS_WORDS = { 'long-channel': 'long-channel estimate', fitted: 'fitted to a card', table: 'table' } as const;
