@@ -38,6 +38,8 @@ function engine(run: () => unknown): FakeResponse {
 export const workbenchHandlers = {
   'GET /api/processes': { body: [BF180G_SUMMARY] },
   [`GET /api/processes/${BF180G_SUMMARY.id}`]: { body: BF180G_PROFILE },
+  // Not characterised: the analytic models only.
+  [`GET /api/processes/${BF180G_SUMMARY.id}/tables`]: { body: [] },
   'POST /api/compute/size': ({ body }: RecordedRequest) => engine(() => computeSize(body as never, BF180G)),
   'POST /api/compute/sweep': ({ body }: RecordedRequest) => engine(() => computeSweep(body as never, BF180G)),
 };

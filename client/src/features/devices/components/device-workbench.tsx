@@ -3,6 +3,7 @@ import { formatQuantity } from '@channelwright/shared/units';
 import { Grid, Paper, Skeleton, Stack } from '@mantine/core';
 import { Suspense, type ReactNode } from 'react';
 import { RegionErrorBoundary } from '../../../components/region-error-boundary';
+import { currentTables, useProcessTables } from '../../../lib/characterisation/process-tables';
 import { useDeviceSizing } from '../hooks/use-device-sizing';
 import { processChoicesOf } from '../model/process-choices';
 import type { SizedDeviceView } from '../model/sized-device';
@@ -32,7 +33,8 @@ interface DeviceWorkbenchProps {
 /** Targets on the left, live results on the right, the curves underneath. */
 export function DeviceWorkbench({ values, onChange, process, processRef, defaults, readOnly, formHeader, formFooter, extraErrors, charts }: DeviceWorkbenchProps) {
   const sizing = useDeviceSizing(values, processRef, defaults);
-  const choices = processChoicesOf(process);
+  const tables = useProcessTables(processRef.processId, processRef.processVersion);
+  const choices = { ...processChoicesOf(process), tableModel: currentTables(tables.data).length > 0 };
   const pickVov = (vov: number) => {
     onChange('vov', formatQuantity(vov, 'V', { digits: 3 }));
     onChange('constraint', 'vov');

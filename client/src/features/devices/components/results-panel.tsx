@@ -1,8 +1,9 @@
 import type { Polarity, SizeResponse } from '@channelwright/shared/schemas';
 import { Alert, Group, Loader, Paper, SimpleGrid, Stack, Text, Title } from '@mantine/core';
-import { IconAlertCircle } from '@tabler/icons-react';
+import { IconAlertCircle, IconClockHour4 } from '@tabler/icons-react';
 import { isApiError } from '../../../lib/api-error';
 import { resultGroups } from '../../../lib/results/result-groups';
+import { ModelAccuracyNote } from './model-accuracy-note';
 import { OperatingSummary } from './operating-summary';
 import { ResultGroupTable } from '../../../components/result-group-table';
 import { WarningsList } from './warnings-list';
@@ -22,6 +23,17 @@ interface ResultsPanelProps {
 
 function Refusal({ error, shownInForm }: { error: unknown; shownInForm: boolean }) {
   const message = isApiError(error) || error instanceof Error ? error.message : 'The device could not be sized.';
+  if (isApiError(error) && (error.code === 'TABLE_NOT_READY' || error.code === 'TABLE_NOT_CHARACTERISED')) {
+    const waiting = error.code === 'TABLE_NOT_READY';
+    return (
+      <Alert color={waiting ? 'blue' : 'orange'} variant="light" icon={<IconClockHour4 size={18} />} title={waiting ? 'Waiting for a table' : 'No table for this device'} role="status">
+        <Text size="sm">
+          {message}
+          {waiting ? ' The device is sized as soon as the characterisation finishes.' : ' Choose an analytic model, or ask a process maintainer to characterise the model card.'}
+        </Text>
+      </Alert>
+    );
+  }
   return (
     <Alert color="red" variant="light" icon={<IconAlertCircle size={18} />} title="This device cannot be sized as asked" role="alert">
       <Text size="sm">{shownInForm ? `${message} (see the highlighted field)` : message}</Text>
@@ -63,7 +75,8 @@ export function ResultsPanel({ result, polarity, missing, invalid = false, error
           <Paper withBorder radius="sm" p="sm">
             <Stack gap="sm">
               <OperatingSummary result={result} />
-              <WarningsList warnings={result.warnings} />
+              <ModelAccuracyNote result={result} />
+              <WarningsList warnings={result.warnings} fromTables={result.model === 'table'} />
             </Stack>
           </Paper>
           <SimpleGrid cols={{ base: 1, md: 2, xl: 3 }} spacing="xs" verticalSpacing="xs">

@@ -1,4 +1,4 @@
-import type { Polarity } from '@channelwright/shared/schemas';
+import { MODEL_LABELS, type Polarity } from '@channelwright/shared/schemas';
 import { Fieldset, Group, Select, SegmentedControl, SimpleGrid, Stack, Text } from '@mantine/core';
 import { QuantityInput } from '../../../components/quantity-input';
 import { QUANTITY_FIELDS, symbolOf } from '../model/quantity-fields';
@@ -13,6 +13,8 @@ export interface ProcessChoices {
   flavours: Record<Polarity, string[]>;
   tnom: number;
   vdd: number;
+  /** The version has tables characterised from its model card: the table model may be chosen. */
+  tableModel?: boolean;
 }
 
 interface TargetsFormProps {
@@ -31,10 +33,11 @@ const POLARITIES = [
   { value: 'pmos', label: 'PMOS' },
 ];
 
-const MODELS = [
+const ANALYTIC = [
   { value: 'all-region', label: 'All-region' },
   { value: 'square-law', label: 'Square law' },
 ];
+const TABLE = { value: 'table', label: 'Tables' };
 
 function temperaturePlaceholder(tnom: number, defaults: TargetDefaults | undefined): string {
   if (defaults && defaults.temperature !== null) return `sheet (${defaults.temperature})`;
@@ -55,6 +58,8 @@ export function TargetsForm({ values, onChange, process, errors, defaults, readO
     />
   );
   const flavours = process.flavours[polarity];
+  // A device already on the table model keeps it on offer, so its choice shows even before the tables load.
+  const models = process.tableModel || values.model === 'table' ? [...ANALYTIC, TABLE] : ANALYTIC;
 
   return (
     <Fieldset disabled={readOnly} variant="unstyled" aria-label="Sizing targets">
@@ -97,8 +102,12 @@ export function TargetsForm({ values, onChange, process, errors, defaults, readO
             fullWidth
             value={values.model}
             onChange={(value) => onChange('model', value as TargetsValues['model'])}
-            data={MODELS}
+            data={models}
           />
+          <Text size="xs" c="dimmed" aria-label="Model in use">
+            {MODEL_LABELS[values.model]}
+            {!process.tableModel && values.model !== 'table' && ' · the table model comes with a characterised model card'}
+          </Text>
         </Stack>
 
         <SimpleGrid cols={2} spacing="xs" verticalSpacing="xs">

@@ -4,12 +4,12 @@ import { IconAlertTriangle, IconCircleCheck } from '@tabler/icons-react';
 import { WARNING_TITLES } from '../../../lib/warning-titles';
 
 /** Every caution the engine raised for this operating point, each in plain words; or that there are none. */
-export function WarningsList({ warnings }: { warnings: Warning[] }) {
+export function WarningsList({ warnings, fromTables = false }: { warnings: Warning[]; fromTables?: boolean }) {
   if (warnings.length === 0) {
     return (
       <Text size="sm" c="dimmed" role="status" aria-label="Warnings">
         <IconCircleCheck size={14} style={{ verticalAlign: -2, marginRight: 6 }} />
-        No warnings: the first-order model is within its range here.
+        {fromTables ? 'No warnings: the targets lie inside the characterised grid.' : 'No warnings: the first-order model is within its range here.'}
       </Text>
     );
   }

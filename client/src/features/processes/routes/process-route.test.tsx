@@ -24,7 +24,7 @@ describe('the process profile page', { timeout: 15_000 }, () => {
   it('shows the parameters per polarity in engineering notation, the corners and the demo-data caution', async () => {
     fakeProfile();
     renderApp('/processes/p-bf180', { token: 'token-designer' });
-    const parameters = await screen.findByRole('table', { name: 'Device parameters' });
+    const parameters = await screen.findByRole('table', { name: 'Device parameters' }, { timeout: 10_000 });
     const kp = within(parameters).getByRole('row', { name: /KP/ });
     expect(within(kp).getAllByRole('cell').map((c) => c.textContent)).toEqual(['310 µA/V²', '65 µA/V²']);
     const tox = within(parameters).getByRole('row', { name: /tox/ });
@@ -47,7 +47,7 @@ describe('the process profile page', { timeout: 15_000 }, () => {
   it('shows the version history and what changed between the last two versions', async () => {
     fakeProfile();
     renderApp('/processes/p-bf180', { token: 'token-designer' });
-    const history = await screen.findByRole('table', { name: 'Version history' });
+    const history = await screen.findByRole('table', { name: 'Version history' }, { timeout: 10_000 });
     expect(within(history).getByText('kp from the new lot')).toBeInTheDocument();
     const diff = await screen.findByRole('table', { name: 'Changes from v1 to v2' });
     const row = within(diff).getByRole('row', { name: /nmos\.kp/ });
@@ -57,7 +57,7 @@ describe('the process profile page', { timeout: 15_000 }, () => {
   it('lets everyone export, but offers editing to maintainers only', async () => {
     fakeProfile(designer);
     const designerView = renderApp('/processes/p-bf180', { token: 'token-designer' });
-    await screen.findByRole('table', { name: 'Device parameters' });
+    await screen.findByRole('table', { name: 'Device parameters' }, { timeout: 10_000 });
     expect(screen.getByRole('button', { name: 'Export v2' })).toBeInTheDocument();
     expect(screen.queryByRole('link', { name: 'Edit' })).not.toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'More actions' })).not.toBeInTheDocument();
@@ -65,6 +65,6 @@ describe('the process profile page', { timeout: 15_000 }, () => {
 
     fakeProfile(admin);
     renderApp('/processes/p-bf180', { token: 'token-admin' });
-    expect(await screen.findByRole('link', { name: 'Edit' })).toHaveAttribute('href', '/processes/p-bf180/edit');
+    expect(await screen.findByRole('link', { name: 'Edit' }, { timeout: 10_000 })).toHaveAttribute('href', '/processes/p-bf180/edit');
   });
 });

@@ -1,7 +1,8 @@
-import { Badge, Grid, Group, Modal, Paper, Stack, Text, Title } from '@mantine/core';
+import { type ProcessProfile } from '@channelwright/shared/schemas';
+import { Badge, Button, Grid, Group, Modal, Paper, Stack, Text, Title } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
 import type { ReactNode } from 'react';
-import { useParams, useSearchParams } from 'react-router-dom';
+import { useNavigate, useParams, useSearchParams } from 'react-router-dom';
 import { ErrorPanel } from '../../../components/error-panel';
 import { InventedDataBadge } from '../../../components/invented-data-badge';
 import { PageHeader } from '../../../components/page-header';
@@ -13,6 +14,8 @@ import { useProcess } from '../../../lib/processes/process';
 import { useProcessVersions } from '../api/get-process-versions';
 import { CornersTable } from '../components/corners-table';
 import { ImportProcessPanel } from '../components/import-process-panel';
+import { ModelCardSummary } from '../components/model-card-summary';
+import { ModelCardUpload } from '../components/model-card-upload';
 import { ParametersTable } from '../components/parameters-table';
 import { ProcessCautions } from '../components/process-cautions';
 import { ProfileActions } from '../components/profile-actions';
@@ -20,19 +23,25 @@ import { ProfileSummary } from '../components/profile-summary';
 import { VersionDiff } from '../components/version-diff';
 import { VersionHistory } from '../components/version-history';
 
-function Section({ title, children }: { title: string; children: ReactNode }) {
+function Section({ title, action, children }: { title: string; action?: ReactNode; children: ReactNode }) {
   return (
     <Paper withBorder radius="md" p="md" component="section" aria-label={title}>
-      <Title order={2} fz="lg" mb="sm">
-        {title}
-      </Title>
+      <Group justify="space-between" mb="sm">
+        <Title order={2} fz="lg">
+          {title}
+        </Title>
+        {action}
+      </Group>
       <RegionErrorBoundary region={title.toLowerCase()}>{children}</RegionErrorBoundary>
     </Paper>
   );
 }
 
-/** /processes/:id?version=n: one profile, the version asked for (the latest by default), its history and diffs. */
-export default function ProcessRoute() {
+/** What the app draws under the model card: the characterisation of the version (another feature). */
+export type VersionCharacterisationView = (props: { profile: ProcessProfile; maintainer: boolean }) => ReactNode;
+
+/** /processes/:id?version=n: one profile, the version asked for (the latest by default), its card, history and diffs. */
+export default function ProcessRoute({ characterisation }: { characterisation?: VersionCharacterisationView }) {
   const { id = '' } = useParams();
   const [params] = useSearchParams();
   const versionParam = Number(params.get('version'));
@@ -41,6 +50,8 @@ export default function ProcessRoute() {
   const profile = useProcess(id, version);
   const versions = useProcessVersions(id);
   const [importing, importDialog] = useDisclosure(false);
+  const [uploadingCard, cardDialog] = useDisclosure(false);
+  const navigate = useNavigate();
 
   if (profile.isPending) return <PageLoader label="Loading the process profile" />;
   if (profile.isError) return <ErrorPanel title="The process profile could not be loaded" message={profile.error.message} onRetry={() => void profile.refetch()} />;
@@ -110,6 +121,21 @@ export default function ProcessRoute() {
             </Stack>
           </Grid.Col>
         </Grid>
+        <Section
+          title="Model card"
+          action={
+            maintainer && (
+              <Button size="compact-sm" variant="light" onClick={cardDialog.open}>
+                Upload a card as v{data.latestVersion + 1}
+              </Button>
+            )
+          }
+        >
+          <ModelCardSummary profile={data} />
+        </Section>
+        {characterisation && data.version.modelCard && (
+          <Section title="Characterisation">{characterisation({ profile: data, maintainer })}</Section>
+        )}
         <Section title="Version history">
           {versions.data ? <VersionHistory profileId={id} versions={versions.data} shown={data.version.number} /> : <PageLoader label="Loading versions" />}
         </Section>
@@ -121,6 +147,15 @@ export default function ProcessRoute() {
         <ImportProcessPanel
           target={{ profileId: data.id, baseVersion: data.latestVersion }}
           onImported={importDialog.close}
+        />
+      </Modal>
+      <Modal opened={uploadingCard} onClose={cardDialog.close} title={`Upload a model card as v${data.latestVersion + 1} of ${data.name}`} size="xl">
+        <ModelCardUpload
+          profile={data}
+          onUploaded={(saved) => {
+            cardDialog.close();
+            void navigate(`/processes/${encodeURIComponent(saved.id)}`);
+          }}
         />
       </Modal>
     </>

@@ -8,6 +8,7 @@ import { ProcessSummaryLine } from '../../../components/process-summary-line';
 import { QuantityInput } from '../../../components/quantity-input';
 import { ServerErrorAlert } from '../../../components/server-error-alert';
 import { isApiError } from '../../../lib/api-error';
+import { currentTables, useProcessTables } from '../../../lib/characterisation/process-tables';
 import { useProcessProfiles } from '../../../lib/processes/process-profiles';
 import { useCreateSheet } from '../api/create-sheet';
 
@@ -18,13 +19,14 @@ interface NewSheetValues {
   processVersion: string;
   corner: string;
   temperature: string;
-  model: 'all-region' | 'square-law';
+  model: 'all-region' | 'square-law' | 'table';
 }
 
-const MODELS = [
+const ANALYTIC = [
   { value: 'all-region', label: 'All-region' },
   { value: 'square-law', label: 'Square law' },
 ];
+const TABLE = { value: 'table', label: 'Tables' };
 
 function toRequest(values: NewSheetValues): { request?: CreateSheetRequestInput; errors: Record<string, string> } {
   const temperature = values.temperature.trim() === '' ? null : parseQuantity(values.temperature, '°C');
@@ -74,6 +76,9 @@ export function NewSheetDialog({ projectId, opened, onClose }: { projectId: stri
       },
     );
   });
+  // The table model is on offer once the chosen version has tables characterised from its model card.
+  const tables = useProcessTables(form.values.processId || undefined, Number(form.values.processVersion) || undefined);
+  const models = currentTables(tables.data).length > 0 || form.values.model === 'table' ? [...ANALYTIC, TABLE] : ANALYTIC;
   const versions = profile ? Array.from({ length: profile.latestVersion }, (_, i) => profile.latestVersion - i) : [];
 
   return (
@@ -112,7 +117,7 @@ export function NewSheetDialog({ projectId, opened, onClose }: { projectId: stri
               error={form.errors.temperature}
             />
           </Group>
-          <SegmentedControl aria-label="Default current model" data={MODELS} {...form.getInputProps('model')} />
+          <SegmentedControl aria-label="Default current model" data={models} {...form.getInputProps('model')} />
           <DialogActions onCancel={onClose} submitLabel="Create sheet" pending={create.isPending} />
         </Stack>
       </form>

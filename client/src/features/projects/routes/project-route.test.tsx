@@ -5,6 +5,7 @@ import { errorBody, installFakeApi } from '../../../test/fake-api';
 import { demoConfig, designer, reviewer } from '../../../test/fixtures';
 import { renderApp } from '../../../test/render-app';
 import { BF180G_SUMMARY } from '../../../test/fake-compute-api';
+import { NMOS_TABLE } from '../../../test/fake-characterisation';
 import { storedSheet, wrenmoss } from '../../../test/fake-sheets';
 
 const members: ProjectMember[] = [
@@ -14,7 +15,7 @@ const members: ProjectMember[] = [
 const { devices: _devices, totals: _totals, ...amplifier } = storedSheet([]);
 const sheets: SheetSummary[] = [amplifier];
 
-function fakeServer(role: Project['myRole'] = 'owner', addMember?: () => ReturnType<typeof errorBody>) {
+function fakeServer(role: Project['myRole'] = 'owner', addMember?: () => ReturnType<typeof errorBody>, tables: unknown[] = []) {
   return installFakeApi({
     'GET /api/config': { body: demoConfig },
     'GET /api/auth/me': { body: designer },
@@ -25,6 +26,7 @@ function fakeServer(role: Project['myRole'] = 'owner', addMember?: () => ReturnT
     [`PATCH /api/projects/${wrenmoss.id}/members/${reviewer.id}`]: ({ body }) => ({ body: { ...members[1], ...(body as object) } }),
     [`POST /api/projects/${wrenmoss.id}/sheets`]: ({ body }) => ({ status: 201, body: { ...storedSheet([]), id: 's-new', name: (body as { name: string }).name } }),
     'GET /api/processes': { body: [BF180G_SUMMARY] },
+    [`GET /api/processes/${BF180G_SUMMARY.id}/tables`]: { body: tables },
   });
 }
 
@@ -92,6 +94,21 @@ describe('the project page', { timeout: 20_000 }, () => {
       temperature: null,
     });
     await waitFor(() => expect(router.state.location.pathname).toBe('/sheets/s-new'));
+  });
+
+  it('offers the table model for a new sheet only once the chosen version has tables', async () => {
+    const api = fakeServer('designer', undefined, [NMOS_TABLE]);
+    const { user } = await openProject();
+    await user.click(screen.getByRole('button', { name: 'New sheet' }));
+    const dialog = await screen.findByRole('form', { name: 'New sheet' });
+    expect(within(dialog).queryByRole('radio', { name: 'Tables' })).not.toBeInTheDocument();
+    await user.type(within(dialog).getByRole('textbox', { name: /^Name/ }), 'Bias mirror');
+    await user.click(within(dialog).getByRole('combobox', { name: /^Process profile/ }));
+    await user.click(await screen.findByRole('option', { name: 'BF180-G' }));
+    await user.click(await within(dialog).findByRole('radio', { name: 'Tables' }));
+    await user.click(within(dialog).getByRole('button', { name: 'Create sheet' }));
+    await waitFor(() => expect(api.to(`POST /api/projects/${wrenmoss.id}/sheets`)).toHaveLength(1));
+    expect(api.to(`POST /api/projects/${wrenmoss.id}/sheets`)[0].body).toMatchObject({ name: 'Bias mirror', processVersion: 2, model: 'table' });
   });
 
   it('shows a viewer the sheets and members without the controls to change them', async () => {

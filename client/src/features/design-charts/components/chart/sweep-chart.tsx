@@ -43,16 +43,21 @@ interface SweepChartProps {
   onPickX?: (x: number) => void;
   pickHint?: string;
   height?: number;
+  /** Rows hold one series' point each (series with x values of their own): join each series over its own points. */
+  sparse?: boolean;
 }
 
 const GRID = 'var(--mantine-color-default-border)';
 const INK = 'var(--mantine-color-dimmed)';
 const MARKER = '#c0392b';
 
+/** Room for the legend: a row of about six entries per 20 px, so many series do not run into the plot. */
+const legendHeight = (series: number) => 4 + 20 * Math.max(1, Math.ceil(series / 6));
+
 const axisLabel = ({ symbol, unit }: AxisSpec) => (unit ? `${symbol} (${unit})` : symbol);
 
 /** A line chart of swept series, with units on its axes, decades on its log axes and the chosen point marked. */
-export function SweepChart({ data, x, y, marker, guides = [], onPickX, pickHint, height = 220 }: SweepChartProps) {
+export function SweepChart({ data, x, y, marker, guides = [], onPickX, pickHint, height = 220, sparse = false }: SweepChartProps) {
   const yAxis = useMemo(() => {
     const values = data.rows.flatMap((row) => data.series.map((s) => row[s.key]));
     return y.log ? logAxisFor(values) : linearAxisFor(values);
@@ -101,7 +106,7 @@ export function SweepChart({ data, x, y, marker, guides = [], onPickX, pickHint,
           label={{ value: axisLabel(y), angle: -90, position: 'insideLeft', offset: 4, fontSize: 12, fill: INK, style: { textAnchor: 'middle' } }}
         />
         <Tooltip content={Readout} isAnimationActive={false} />
-        <Legend verticalAlign="top" height={24} iconType="plainline" itemSorter={null} wrapperStyle={{ fontSize: 11 }} />
+        <Legend verticalAlign="top" height={legendHeight(data.series.length)} iconType="plainline" itemSorter={null} wrapperStyle={{ fontSize: 11 }} />
         {data.series.map((s) => (
           <Line
             key={s.key}
@@ -113,7 +118,7 @@ export function SweepChart({ data, x, y, marker, guides = [], onPickX, pickHint,
             dot={false}
             activeDot={{ r: 3 }}
             isAnimationActive={false}
-            connectNulls={false}
+            connectNulls={sparse}
           />
         ))}
         {guides.map((guide) => (
