@@ -39,7 +39,7 @@ describe('the audit trail', () => {
   it("lists the project's events newest first, with actor, before and after", async () => {
     const response = await list();
     const events = response.body.map((event: unknown) => auditEventSchema.parse(event));
-    expect(events.map((e: { action: string }) => e.action)).toEqual(['review.approved', 'review.requested', 'revision.created', 'member.added', 'member.added']);
+    expect(events.map((e: { action: string }) => e.action)).toEqual(['review.approved', 'review.requested', 'revision.created', 'member.added', 'member.added', 'project.created']);
     expect(events[0]).toMatchObject({ actor: { id: ids.reviewer, email: reviewer.email }, before: { state: 'open' }, after: { state: 'approved' }, projectId });
     expect(events[2]).toMatchObject({ before: null, after: { number: 1, hash: 'ab12' } });
   });
@@ -49,9 +49,9 @@ describe('the audit trail', () => {
     expect((await list({ entityType: 'revision' })).body).toHaveLength(1);
     expect((await list({ actor: reviewer.email.toUpperCase() })).body.map((e: { action: string }) => e.action)).toEqual(['review.approved']);
     expect((await list({ actor: ids.designer, entityType: 'review-request' })).body).toHaveLength(1);
-    expect((await list({ actor: ids.designer })).body).toHaveLength(4);
+    expect((await list({ actor: ids.designer })).body).toHaveLength(5);
     const today = new Date().toISOString().slice(0, 10);
-    expect((await list({ from: today, to: today })).body).toHaveLength(5);
+    expect((await list({ from: today, to: today })).body).toHaveLength(6);
     expect((await list({ to: '2001-01-01' })).body).toEqual([]);
     expect((await list({ from: '2999-01-01T00:00:00Z' })).body).toEqual([]);
   });
@@ -70,7 +70,7 @@ describe('the audit trail', () => {
     const parsed = Papa.parse<Record<string, string>>(response.text, { header: true, skipEmptyLines: true });
     expect(parsed.errors).toEqual([]);
     expect(parsed.meta.fields).toEqual(['id', 'at', 'actor', 'actorEmail', 'action', 'entityType', 'entityId', 'summary', 'before', 'after']);
-    expect(parsed.data.map((row) => row.action)).toEqual(['review.approved', 'review.requested', 'revision.created', 'member.added', 'member.added']);
+    expect(parsed.data.map((row) => row.action)).toEqual(['review.approved', 'review.requested', 'revision.created', 'member.added', 'member.added', 'project.created']);
     expect(parsed.data[0]).toMatchObject({ actor: 'Brackenfold Reviewer', actorEmail: reviewer.email, before: '{"state":"open"}' });
     expect(parsed.data[1]!.summary).toBe(`'=HYPERLINK("x") asked for a review, with "quotes", commas`);
   });
