@@ -119,6 +119,7 @@ describe('the gm/ID design charts of a characterised version', { timeout: 20_000
     expect(screen.getByRole('textbox', { name: 'L' })).toHaveValue('1 µm');
     expect(screen.getByRole('textbox', { name: 'gm/ID' })).toHaveValue('12');
     expect(screen.getByRole('textbox', { name: 'VDS' })).toHaveValue('900 mV');
+    expect(screen.getByRole('combobox', { name: 'Process' })).toHaveValue(`${BF180G_WITH_CARD.name} · v2`);
     expect(await screen.findByRole('radio', { name: 'Tables' }, { timeout: 10_000 })).toBeChecked();
     await user.click(screen.getByRole('textbox', { name: 'ID' }));
     await user.paste('10u');

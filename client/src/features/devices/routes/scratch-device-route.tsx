@@ -64,7 +64,7 @@ export default function ScratchDeviceRoute({ charts }: ScratchDeviceRouteProps =
         onChange={setField}
         process={profile.data.version.definition}
         processRef={{ processId: summary.id, processVersion: version ?? summary.latestVersion }}
-        formHeader={<ProcessPicker profiles={available} value={summary.id} onChange={setChosenId} />}
+        formHeader={<ProcessPicker profiles={available} value={summary.id} version={version} onChange={setChosenId} />}
         charts={charts}
       />
       {/* Mounted only while open: its project and sheet lists are fetched when the designer asks to send. */}

@@ -2,7 +2,6 @@ import { formatQuantity } from '@channelwright/shared/units';
 import { Button, Group, Select, Text } from '@mantine/core';
 import { IconRuler2 } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
-import { lengthLabel } from '../../model/gm-id-curves';
 
 interface SizeDevicePickerProps {
   lengths: number[];
@@ -26,7 +25,7 @@ export function SizeDevicePicker({ lengths, l, onLengthChange, gmId, href }: Siz
         size="xs"
         w={130}
         allowDeselect={false}
-        data={lengths.map((length) => ({ value: String(length), label: lengthLabel(length).replace('L = ', '') }))}
+        data={lengths.map((length) => ({ value: String(length), label: formatQuantity(length, 'm', { digits: 3 }) }))}
         value={String(l)}
         onChange={(value) => value !== null && onLengthChange(Number(value))}
       />
