@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { NMOS_CHART } from '../../../test/fake-characterisation';
-import { curvesAgainstGmId, readAtGmId } from './gm-id-curves';
+import { curvesAgainstGmId, pointOfRow, readAtGmId } from './gm-id-curves';
 
 const [short] = NMOS_CHART.curves;
 
@@ -32,5 +32,12 @@ describe('gm/ID curves', () => {
   it('leave out values a log axis cannot draw', () => {
     const curve = { ...short, idW: [0, 10, 40] };
     expect(curvesAgainstGmId([curve], 'idW', true).rows.map((row) => row.x)).toEqual([5, 10]);
+  });
+
+  it('name the length and gm/ID of a clicked row by the curve whose point it holds', () => {
+    const data = curvesAgainstGmId(NMOS_CHART.curves, 'gain', false);
+    expect(pointOfRow(NMOS_CHART.curves, data.rows[1])).toEqual({ l: 1e-6, gmId: 6 });
+    expect(pointOfRow(NMOS_CHART.curves, data.rows[4])).toEqual({ l: 0.18e-6, gmId: 20 });
+    expect(pointOfRow(NMOS_CHART.curves, { x: 7 } as never)).toBeNull();
   });
 });

@@ -26,6 +26,18 @@ export function curvesAgainstGmId(curves: DesignChartCurve[], figure: CurveFigur
   return { rows, series };
 }
 
+/** Where a design point sits on the charts: a characterised length and a gm/ID. */
+export interface ChartPoint {
+  l: number;
+  gmId: number;
+}
+
+/** The length and gm/ID of a row of `curvesAgainstGmId` (each row holds one curve's point); null for an empty row. */
+export function pointOfRow(curves: DesignChartCurve[], row: ChartRow): ChartPoint | null {
+  const index = curves.findIndex((_, i) => typeof row[`l${i}`] === 'number');
+  return index < 0 ? null : { l: curves[index].l, gmId: row.x };
+}
+
 /** A curve's figures at one gm/ID, interpolated linearly between its two nearest points; null outside the curve. */
 export function readAtGmId(curve: DesignChartCurve, gmId: number): Record<CurveFigure | 'vgs', number> | null {
   // On the strong-inversion side gm/ID falls from point to point (the schema's promise).

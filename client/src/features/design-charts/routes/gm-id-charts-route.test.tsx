@@ -1,6 +1,7 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { installFakeApi } from '../../../test/fake-api';
+import { workbenchHandlers } from '../../../test/fake-compute-api';
 import { BF180G_WITH_CARD, NMOS_CHART, NMOS_TABLE } from '../../../test/fake-characterisation';
 import { demoConfig, designer } from '../../../test/fixtures';
 import { renderApp } from '../../../test/render-app';
@@ -9,6 +10,8 @@ const ID = BF180G_WITH_CARD.id;
 
 function fakeCharts(tables = [NMOS_TABLE]) {
   return installFakeApi({
+    ...workbenchHandlers,
+    'POST /api/compute/sweep': () => new Promise<never>(() => {}),
     'GET /api/config': { body: demoConfig },
     'GET /api/auth/me': { body: designer },
     [`GET /api/processes/${ID}`]: { body: BF180G_WITH_CARD },
@@ -73,5 +76,55 @@ describe('the gm/ID design charts of a characterised version', { timeout: 20_000
     renderApp(`/processes/${ID}/design-charts?version=2`, { token: 'token-designer' });
     expect(await screen.findByText('No tables yet', {}, { timeout: 10_000 })).toBeInTheDocument();
     expect(screen.queryByRole('figure')).not.toBeInTheDocument();
+  });
+
+  it('shows VT against L at the bias the server chose', async () => {
+    fakeCharts();
+    renderApp(`/processes/${ID}/design-charts?version=2`, { token: 'token-designer' });
+    const figure = await screen.findByRole('figure', { name: 'Threshold voltage VT against L' }, { timeout: 10_000 });
+    expect(await within(figure).findByText(/^TT, 27 °C, VDS = 900 mV, VSB = 0 V · the simulator’s VT/)).toBeInTheDocument();
+    // The line itself is drawn only in a real browser; gm-id-charts-plotted.test.tsx checks the points handed to it.
+  });
+
+  it('opens the scratch device at the length and gm/ID chosen from the keyboard, with the chart’s device, bias and the table model', async () => {
+    const api = fakeCharts();
+    const { user } = renderApp(`/processes/${ID}/design-charts?version=2`, { token: 'token-designer' });
+    await screen.findByRole('table', { name: 'Figures at the chosen gm/ID' }, { timeout: 10_000 });
+    const field = screen.getByRole('textbox', { name: 'Read at gm/ID' });
+    await user.clear(field);
+    await user.type(field, '12');
+    // The length select, worked from the keyboard: Tab from the gm/ID field, open, step to the second length, take it.
+    await user.tab();
+    expect(screen.getByRole('combobox', { name: 'Length' })).toHaveFocus();
+    await user.keyboard('{ArrowDown}{ArrowDown}{Enter}');
+    const link = await screen.findByRole('link', { name: 'Size a device at L = 1 µm, gm/ID = 12 1/V' });
+    const href = new URL(link.getAttribute('href') ?? '', 'http://localhost');
+    expect(href.pathname).toBe('/workbench');
+    expect(Object.fromEntries(href.searchParams)).toEqual({
+      processId: ID,
+      version: '2',
+      polarity: 'nmos',
+      corner: 'TT',
+      temperature: '27',
+      vds: '0.9',
+      vsb: '0',
+      l: '0.000001',
+      gmId: '12',
+      model: 'table',
+    });
+
+    link.focus();
+    await user.keyboard('{Enter}');
+    await screen.findByRole('group', { name: 'Sizing targets' }, { timeout: 10_000 });
+    expect(screen.getByRole('textbox', { name: 'L' })).toHaveValue('1 µm');
+    expect(screen.getByRole('textbox', { name: 'gm/ID' })).toHaveValue('12');
+    expect(screen.getByRole('textbox', { name: 'VDS' })).toHaveValue('900 mV');
+    expect(screen.getByRole('combobox', { name: 'Process' })).toHaveValue(`${BF180G_WITH_CARD.name} · v2`);
+    expect(await screen.findByRole('radio', { name: 'Tables' }, { timeout: 10_000 })).toBeChecked();
+    await user.click(screen.getByRole('textbox', { name: 'ID' }));
+    await user.paste('10u');
+    await waitFor(() =>
+      expect(api.to('POST /api/compute/size').at(-1)?.body).toMatchObject({ model: 'table', l: 1e-6, gmId: 12, vds: 0.9, vsb: 0, id: 10e-6, corner: 'TT', temperature: 27, polarity: 'nmos', processId: ID, processVersion: 2 }),
+    );
   });
 });

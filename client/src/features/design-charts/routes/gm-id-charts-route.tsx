@@ -13,6 +13,9 @@ import { useProcess } from '../../../lib/processes/process';
 import { useDesignChart } from '../api/get-design-chart';
 import { GmIdCharts } from '../components/gm-id/gm-id-charts';
 import { GmIdReadout } from '../components/gm-id/gm-id-readout';
+import { SizeDevicePicker } from '../components/gm-id/size-device-picker';
+import type { ChartPoint } from '../model/gm-id-curves';
+import type { SizeDeviceHref } from '../model/device-from-chart';
 
 interface Picks {
   corner?: string;
@@ -24,8 +27,13 @@ interface Picks {
 const deviceKey = (polarity: Polarity, flavour: string | null) => `${polarity}/${flavour ?? ''}`;
 const voltageOptions = (values: number[]) => values.map((v) => ({ value: String(v), label: formatQuantity(v, 'V', { digits: 3 }) }));
 
+export interface GmIdChartsRouteProps {
+  /** The device page a chosen length and gm/ID open (the app passes the scratch device page). */
+  sizeDeviceHref?: SizeDeviceHref;
+}
+
 /** /processes/:id/design-charts?version=n: the gm/ID design charts of a characterised version, device by device. */
-export default function GmIdChartsRoute() {
+export default function GmIdChartsRoute({ sizeDeviceHref }: GmIdChartsRouteProps = {}) {
   const { id = '' } = useParams();
   const [params] = useSearchParams();
   const asked = Number(params.get('version'));
@@ -38,6 +46,7 @@ export default function GmIdChartsRoute() {
   const [gmIdText, setGmIdText] = useState('15');
   // While a new gm/ID is being typed (and does not read yet), the figures of the last one stay.
   const lastGmId = useRef(15);
+  const [chosenL, setChosenL] = useState<number | null>(null);
   const chosen = devices.find((t) => deviceKey(t.polarity, t.flavour) === device) ?? devices[0];
   const chart = useDesignChart(id, chosen && version ? { version, polarity: chosen.polarity, flavour: chosen.flavour ?? undefined, ...picks } : null);
 
@@ -50,6 +59,17 @@ export default function GmIdChartsRoute() {
   const axes = chart.data?.axes;
   const pick = (field: keyof Picks) => (value: string | null) => setPicks((p) => ({ ...p, [field]: field === 'corner' ? (value ?? undefined) : value === null ? undefined : Number(value) }));
   const pmos = chosen?.polarity === 'pmos';
+  const lengths = chart.data?.curves.map((curve) => curve.l) ?? [];
+  // Another device may have other lengths: the shortest stands in until one of its own is chosen.
+  const l = chosenL !== null && lengths.includes(chosenL) ? chosenL : lengths[0];
+  const pickPoint = (point: ChartPoint) => {
+    setChosenL(point.l);
+    setGmIdText(formatQuantity(point.gmId, '', { digits: 4 }));
+  };
+  const sizeHref =
+    sizeDeviceHref && chart.data && l !== undefined && version
+      ? sizeDeviceHref({ processId: id, version, polarity: chart.data.polarity, flavour: chart.data.flavour, corner: chart.data.corner, temperature: chart.data.temperature, vds: chart.data.vds, vsb: chart.data.vsb, l, gmId })
+      : undefined;
 
   return (
     <>
@@ -78,33 +98,36 @@ export default function GmIdChartsRoute() {
         )}
         {chosen && (
           <Paper withBorder radius="sm" p="sm">
-            <Group gap="sm" align="flex-end" wrap="wrap">
-              <Select
-                label="Device"
-                size="xs"
-                w={170}
-                allowDeselect={false}
-                data={devices.map((t) => ({ value: deviceKey(t.polarity, t.flavour), label: `${t.polarity.toUpperCase()}${t.flavour ? ` ${t.flavour}` : ''} (${t.model})` }))}
-                value={deviceKey(chosen.polarity, chosen.flavour)}
-                onChange={(value) => {
-                  setDevice(value);
-                  setPicks({});
-                }}
-              />
-              <Select label="Corner" size="xs" w={90} allowDeselect={false} data={axes?.corners ?? chosen.grid.corners} value={chart.data?.corner ?? null} onChange={pick('corner')} />
-              <Select
-                label="Temperature"
-                size="xs"
-                w={110}
-                allowDeselect={false}
-                data={(axes?.temperatures ?? chosen.grid.temperatures).map((t) => ({ value: String(t), label: `${t} °C` }))}
-                value={chart.data ? String(chart.data.temperature) : null}
-                onChange={pick('temperature')}
-              />
-              <Select label={pmos ? 'VSD' : 'VDS'} size="xs" w={100} allowDeselect={false} data={voltageOptions(axes?.vds ?? chosen.grid.vds)} value={chart.data ? String(chart.data.vds) : null} onChange={pick('vds')} />
-              <Select label={pmos ? 'VBS' : 'VSB'} size="xs" w={100} allowDeselect={false} data={voltageOptions(axes?.vsb ?? chosen.grid.vsb)} value={chart.data ? String(chart.data.vsb) : null} onChange={pick('vsb')} />
-              <QuantityInput label="Read at gm/ID" unit="1/V" size="xs" w={130} value={gmIdText} onChange={setGmIdText} />
-            </Group>
+            <Stack gap="xs">
+              <Group gap="sm" align="flex-end" wrap="wrap">
+                <Select
+                  label="Device"
+                  size="xs"
+                  w={170}
+                  allowDeselect={false}
+                  data={devices.map((t) => ({ value: deviceKey(t.polarity, t.flavour), label: `${t.polarity.toUpperCase()}${t.flavour ? ` ${t.flavour}` : ''} (${t.model})` }))}
+                  value={deviceKey(chosen.polarity, chosen.flavour)}
+                  onChange={(value) => {
+                    setDevice(value);
+                    setPicks({});
+                  }}
+                />
+                <Select label="Corner" size="xs" w={90} allowDeselect={false} data={axes?.corners ?? chosen.grid.corners} value={chart.data?.corner ?? null} onChange={pick('corner')} />
+                <Select
+                  label="Temperature"
+                  size="xs"
+                  w={110}
+                  allowDeselect={false}
+                  data={(axes?.temperatures ?? chosen.grid.temperatures).map((t) => ({ value: String(t), label: `${t} °C` }))}
+                  value={chart.data ? String(chart.data.temperature) : null}
+                  onChange={pick('temperature')}
+                />
+                <Select label={pmos ? 'VSD' : 'VDS'} size="xs" w={100} allowDeselect={false} data={voltageOptions(axes?.vds ?? chosen.grid.vds)} value={chart.data ? String(chart.data.vds) : null} onChange={pick('vds')} />
+                <Select label={pmos ? 'VBS' : 'VSB'} size="xs" w={100} allowDeselect={false} data={voltageOptions(axes?.vsb ?? chosen.grid.vsb)} value={chart.data ? String(chart.data.vsb) : null} onChange={pick('vsb')} />
+                <QuantityInput label="Read at gm/ID" unit="1/V" size="xs" w={130} value={gmIdText} onChange={setGmIdText} />
+              </Group>
+              {l !== undefined && <SizeDevicePicker lengths={lengths} l={l} onLengthChange={setChosenL} gmId={gmId} href={sizeHref} />}
+            </Stack>
           </Paper>
         )}
         {chosen && (
@@ -116,7 +139,7 @@ export default function GmIdChartsRoute() {
                 </Alert>
               ))}
               {chart.data && <GmIdReadout chart={chart.data} gmId={gmId} />}
-              <GmIdCharts chart={chart.data} loading={chart.isPending} error={chart.error} marker={gmId} />
+              <GmIdCharts chart={chart.data} loading={chart.isPending} error={chart.error} marker={gmId} chosenL={l} onPickPoint={pickPoint} />
             </Stack>
           </RegionErrorBoundary>
         )}

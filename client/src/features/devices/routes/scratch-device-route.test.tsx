@@ -170,4 +170,20 @@ describe('the device form', { timeout: 20_000 }, () => {
     expect(screen.queryByRole('textbox', { name: 'VDS' })).not.toBeInTheDocument();
     expect(screen.getByRole('note', { name: 'Polarity convention' })).toHaveTextContent('polarity-normalised: enter VSG, VSD and VBS');
   });
+
+  it('starts from a link: the linked process version, PMOS, its bias, L and gm/ID as the constraint', async () => {
+    const api = fakeServer();
+    const { user } = renderApp('/workbench?processId=p-bf180g&version=1&polarity=pmos&corner=SS&temperature=125&l=0.000001&gmId=12&vds=0.6&vsb=0.2', { token: 'token-ines' });
+    await screen.findByRole('group', { name: 'Sizing targets' }, { timeout: 10_000 });
+    expect(screen.getByRole('combobox', { name: 'Process' })).toHaveValue('BF180-G · v1');
+    expect(screen.getByRole('textbox', { name: 'L' })).toHaveValue('1 µm');
+    expect(screen.getByRole('textbox', { name: 'gm/ID' })).toHaveValue('12');
+    expect(screen.getByRole('textbox', { name: 'VSD' })).toHaveValue('600 mV');
+    expect(screen.getByRole('textbox', { name: 'VBS' })).toHaveValue('200 mV');
+    await user.click(screen.getByRole('textbox', { name: 'ID' }));
+    await user.paste('10u');
+    await waitFor(() =>
+      expect(lastSizeRequest(api)).toMatchObject({ processId: 'p-bf180g', processVersion: 1, polarity: 'pmos', corner: 'SS', temperature: 125, l: 1e-6, gmId: 12, vds: 0.6, vsb: 0.2, id: 10e-6 }),
+    );
+  });
 });

@@ -1,6 +1,7 @@
 import { Button } from '@mantine/core';
 import { IconSend } from '@tabler/icons-react';
 import { useState } from 'react';
+import { useSearchParams } from 'react-router-dom';
 import { ErrorPanel } from '../../../components/error-panel';
 import { PageHeader } from '../../../components/page-header';
 import { PageLoader } from '../../../components/page-loader';
@@ -11,20 +12,29 @@ import { ProcessPicker } from '../components/process-picker';
 import { SendToSheetDialog } from '../components/send-to-sheet-dialog';
 import { useTargetsForm } from '../hooks/use-targets-form';
 import type { SizedDeviceView } from '../model/sized-device';
+import { prefillFromSearch } from '../model/workbench-link';
 
 export interface ScratchDeviceRouteProps {
   /** Drawn under the results once the device is sized: the app passes the design charts. */
   charts?: SizedDeviceView;
 }
 
-/** Size a device without a sheet: pick a process, type the targets, read the results. Nothing is stored. */
+/**
+ * Size a device without a sheet: pick a process, type the targets, read the results. Nothing is stored.
+ * Another page may open it with a process, a version and targets in the search parameters (see workbench-link).
+ */
 export default function ScratchDeviceRoute({ charts }: ScratchDeviceRouteProps = {}) {
+  const [params] = useSearchParams();
+  // Read once: the link gives the starting point, the designer's typing takes over from there.
+  const [start] = useState(() => prefillFromSearch(params));
   const profiles = useProcessProfiles();
-  const [chosenId, setChosenId] = useState<string | null>(null);
+  const [chosenId, setChosenId] = useState<string | null>(start.processId ?? null);
   const available = profiles.data?.filter((p) => !p.deprecated) ?? [];
   const summary = available.find((p) => p.id === chosenId) ?? available[0];
-  const profile = useProcess(summary?.id, summary?.latestVersion);
-  const { values, setField } = useTargetsForm();
+  // The linked version (e.g. the one whose tables drew the charts) until another process is picked.
+  const version = summary && summary.id === start.processId && start.version ? start.version : summary?.latestVersion;
+  const profile = useProcess(summary?.id, version);
+  const { values, setField } = useTargetsForm(start.values);
   const [sending, setSending] = useState(false);
 
   const header = (
@@ -53,12 +63,12 @@ export default function ScratchDeviceRoute({ charts }: ScratchDeviceRouteProps =
         values={values}
         onChange={setField}
         process={profile.data.version.definition}
-        processRef={{ processId: summary.id, processVersion: summary.latestVersion }}
-        formHeader={<ProcessPicker profiles={available} value={summary.id} onChange={setChosenId} />}
+        processRef={{ processId: summary.id, processVersion: version ?? summary.latestVersion }}
+        formHeader={<ProcessPicker profiles={available} value={summary.id} version={version} onChange={setChosenId} />}
         charts={charts}
       />
       {/* Mounted only while open: its project and sheet lists are fetched when the designer asks to send. */}
-      {sending && <SendToSheetDialog opened onClose={() => setSending(false)} values={values} processRef={{ processId: summary.id, processVersion: summary.latestVersion }} processName={summary.name} />}
+      {sending && <SendToSheetDialog opened onClose={() => setSending(false)} values={values} processRef={{ processId: summary.id, processVersion: version ?? summary.latestVersion }} processName={summary.name} />}
     </>
   );
 }

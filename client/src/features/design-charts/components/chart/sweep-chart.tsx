@@ -11,7 +11,7 @@ import {
   XAxis,
   YAxis,
 } from 'recharts';
-import type { ChartData } from '../../model/chart-series';
+import type { ChartData, ChartRow } from '../../model/chart-series';
 import { makeReadout } from './chart-readout';
 import classes from './sweep-chart.module.css';
 import { linearAxisFor, linearTicks } from '../../model/linear-ticks';
@@ -39,8 +39,8 @@ interface SweepChartProps {
   marker?: ChartMarker;
   /** Further vertical lines, e.g. the zero-temperature-coefficient VGS. */
   guides?: ChartMarker[];
-  /** Clicking the plot picks the x value under the pointer. */
-  onPickX?: (x: number) => void;
+  /** Clicking the plot picks the x value under the pointer (and the row it belongs to). */
+  onPickX?: (x: number, row: ChartRow) => void;
   pickHint?: string;
   height?: number;
   /** Rows hold one series' point each (series with x values of their own): join each series over its own points. */
@@ -76,7 +76,7 @@ export function SweepChart({ data, x, y, marker, guides = [], onPickX, pickHint,
         onClick={(state) => {
           const index = Number(state.activeTooltipIndex ?? state.activeIndex);
           const row = Number.isInteger(index) ? data.rows[index] : undefined;
-          if (onPickX && row) onPickX(row.x);
+          if (onPickX && row) onPickX(row.x, row);
         }}
         style={onPickX ? { cursor: 'crosshair' } : undefined}
       >

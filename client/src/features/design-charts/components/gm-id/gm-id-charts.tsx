@@ -1,9 +1,10 @@
 import type { DesignChart } from '@channelwright/shared/schemas';
 import { formatQuantity } from '@channelwright/shared/units';
 import { SimpleGrid } from '@mantine/core';
-import { curvesAgainstGmId, type CurveFigure } from '../../model/gm-id-curves';
+import { curvesAgainstGmId, pointOfRow, type ChartPoint, type CurveFigure } from '../../model/gm-id-curves';
 import { ChartFrame } from '../chart/chart-frame';
 import { SweepChart, type AxisSpec } from '../chart/sweep-chart';
+import { VtLengthChart } from './vt-length-chart';
 
 interface Panel {
   figure: CurveFigure;
@@ -21,8 +22,20 @@ const PANELS: Panel[] = [
 
 const GM_ID_AXIS: AxisSpec = { symbol: 'gm/ID', unit: '1/V' };
 
-/** The four gm/ID design charts of one device, one line per characterised length. */
-export function GmIdCharts({ chart, loading, error, marker }: { chart: DesignChart | undefined; loading: boolean; error: unknown; marker?: number }) {
+interface GmIdChartsProps {
+  chart: DesignChart | undefined;
+  loading: boolean;
+  error: unknown;
+  /** The gm/ID read at: a dashed line on every chart. */
+  marker?: number;
+  /** The chosen length: marked on VT against L. */
+  chosenL?: number;
+  /** Clicking a point of a gm/ID chart picks its length and gm/ID. */
+  onPickPoint?: (point: ChartPoint) => void;
+}
+
+/** The four gm/ID design charts of one device, one line per characterised length, and VT against L. */
+export function GmIdCharts({ chart, loading, error, marker, chosenL, onPickPoint }: GmIdChartsProps) {
   const held = chart
     ? `${chart.corner}, ${chart.temperature} °C, ${chart.polarity === 'pmos' ? 'VSD' : 'VDS'} = ${formatQuantity(chart.vds, 'V', { digits: 3 })}, ${chart.polarity === 'pmos' ? 'VBS' : 'VSB'} = ${formatQuantity(chart.vsb, 'V', { digits: 3 })}`
     : '';
@@ -40,10 +53,27 @@ export function GmIdCharts({ chart, loading, error, marker }: { chart: DesignCha
             loading={loading && !chart}
             error={error}
           >
-            <SweepChart data={data} x={GM_ID_AXIS} y={panel.y} sparse height={260} marker={marker === undefined ? undefined : { x: marker, label: 'read here' }} />
+            <SweepChart
+              data={data}
+              x={GM_ID_AXIS}
+              y={panel.y}
+              sparse
+              height={260}
+              marker={marker === undefined ? undefined : { x: marker, label: 'read here' }}
+              onPickX={
+                onPickPoint && chart
+                  ? (_, row) => {
+                      const point = pointOfRow(chart.curves, row);
+                      if (point) onPickPoint(point);
+                    }
+                  : undefined
+              }
+              pickHint={onPickPoint ? 'Click to take this length and gm/ID into a device' : undefined}
+            />
           </ChartFrame>
         );
       })}
+      <VtLengthChart chart={chart} held={held} loading={loading} error={error} chosenL={chosenL} />
     </SimpleGrid>
   );
 }
