@@ -3,26 +3,17 @@
 // sheet read (a token, project access, the sheet with its devices), one after the other on one server.
 // Targets: compute/size at ≥ 60 % of health's throughput with p99 under 25 ms; the sheet read at ≥ 40 %.
 // Usage: node bench/authenticated-throughput-bench.mjs [path/to/main.js]  (default: this server's dist/main.js)
-import { spawn } from 'node:child_process';
-import { mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
 import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import autocannon from 'autocannon';
-import { freePort, waitForHealth } from './bench-server.mjs';
+import { demoDesignerToken, startDemoServer } from './bench-server.mjs';
 
 const here = dirname(fileURLToPath(import.meta.url));
 const mainJs = resolve(process.argv[2] ?? join(here, '../dist/main.js'));
 const CONNECTIONS = 64;
 const SECONDS = 10;
 
-const dataDir = mkdtempSync(join(tmpdir(), 'channelwright-bench-'));
-const port = await freePort();
-const base = `http://127.0.0.1:${port}`;
-const server = spawn(process.execPath, [mainJs], {
-  env: { ...process.env, PORT: String(port), DATA_DIR: dataDir, SEED_DEMO: 'true', NODE_ENV: 'development', DEMO_CHARACTERISATION: 'false' },
-  stdio: 'ignore',
-});
+const { base, stop } = await startDemoServer(mainJs);
 
 async function api(method, path, token, body) {
   const response = await fetch(`${base}${path}`, { method, headers: { 'content-type': 'application/json', ...(token ? { authorization: `Bearer ${token}` } : {}) }, body: body && JSON.stringify(body) });
@@ -35,9 +26,7 @@ const line = (name, result) =>
   `  ${name.padEnd(28)} ${result.requests.average.toFixed(0).padStart(6)} req/s  p50 ${String(result.latency.p50).padStart(4)} ms  p99 ${String(result.latency.p99).padStart(4)} ms  errors ${result.errors + result.non2xx}`;
 
 try {
-  await waitForHealth(base);
-  const { DEMO_ACCOUNTS, DEMO_PASSWORD } = await import(join(here, '../dist/seed/demo-accounts.js'));
-  const { accessToken } = await api('POST', '/api/auth/login', null, { email: DEMO_ACCOUNTS.designer.email, password: DEMO_PASSWORD });
+  const accessToken = await demoDesignerToken(base, mainJs);
   const [profile] = await api('GET', '/api/processes', accessToken);
   const [project] = await api('GET', '/api/projects', accessToken);
   const [sheet] = await api('GET', `/api/projects/${project.id}/sheets`, accessToken);
@@ -55,6 +44,5 @@ try {
   process.stdout.write(`  compute/size: ratio ${ratio(compute).toFixed(2)} (target ≥ 0.60), p99 ${compute.latency.p99} ms (target < 25 ms) → ${ratio(compute) >= 0.6 && compute.latency.p99 < 25 ? 'MET' : 'NOT MET'}\n`);
   process.stdout.write(`  sheet read: ratio ${ratio(read).toFixed(2)} (target ≥ 0.40) → ${ratio(read) >= 0.4 ? 'MET' : 'NOT MET'}\n`);
 } finally {
-  server.kill();
-  rmSync(dataDir, { recursive: true, force: true });
+  stop();
 }

@@ -3,12 +3,9 @@
 // maximum temperature (3) = 3,000 cells, answered to the last byte over HTTP; and GET /api/health p99 meanwhile.
 // Target: the matrix under 200 ms.
 // Usage: node bench/sheet-matrix-bench.mjs [path/to/main.js]  (default: this server's dist/main.js)
-import { spawn } from 'node:child_process';
-import { mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
 import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { freePort, waitForHealth } from './bench-server.mjs';
+import { demoDesignerToken, startDemoServer } from './bench-server.mjs';
 
 const here = dirname(fileURLToPath(import.meta.url));
 const mainJs = resolve(process.argv[2] ?? join(here, '../dist/main.js'));
@@ -16,13 +13,7 @@ const DEVICES = 200;
 const RUNS = 7;
 const TARGET_MS = 200;
 
-const dataDir = mkdtempSync(join(tmpdir(), 'channelwright-bench-'));
-const port = await freePort();
-const base = `http://127.0.0.1:${port}`;
-const server = spawn(process.execPath, [mainJs], {
-  env: { ...process.env, PORT: String(port), DATA_DIR: dataDir, SEED_DEMO: 'true', NODE_ENV: 'development', DEMO_CHARACTERISATION: 'false' },
-  stdio: 'ignore',
-});
+const { base, stop } = await startDemoServer(mainJs);
 
 async function api(method, path, token, body) {
   const response = await fetch(`${base}${path}`, { method, headers: { 'content-type': 'application/json', authorization: `Bearer ${token}` }, body: body && JSON.stringify(body) });
@@ -33,10 +24,7 @@ async function api(method, path, token, body) {
 const percentile = (values, p) => [...values].sort((a, b) => a - b)[Math.min(values.length - 1, Math.floor(p * values.length))];
 
 try {
-  await waitForHealth(base);
-  const { DEMO_ACCOUNTS, DEMO_PASSWORD } = await import(join(here, '../dist/seed/demo-accounts.js'));
-  const login = await fetch(`${base}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: DEMO_ACCOUNTS.designer.email, password: DEMO_PASSWORD }) });
-  const { accessToken: token } = await login.json();
+  const token = await demoDesignerToken(base, mainJs);
   const processes = (await api('GET', '/api/processes', token)).body;
   const profile = processes.find((p) => p.name === 'BF180-G') ?? processes[0];
   const [project] = (await api('GET', '/api/projects', token)).body;
@@ -73,6 +61,5 @@ try {
   process.stdout.write(`  POST /api/sheets/:id/corners to the last byte: median ${median.toFixed(0)} ms, best ${Math.min(...times).toFixed(0)} ms over ${RUNS} runs (target under ${TARGET_MS} ms) → ${median < TARGET_MS ? 'MET' : 'NOT MET'}\n`);
   process.stdout.write(`  GET /api/health meanwhile: p50 ${percentile(healthTimes, 0.5).toFixed(1)} ms, p99 ${percentile(healthTimes, 0.99).toFixed(1)} ms over ${healthTimes.length} requests\n`);
 } finally {
-  server.kill();
-  rmSync(dataDir, { recursive: true, force: true });
+  stop();
 }

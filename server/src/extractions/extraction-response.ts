@@ -19,7 +19,7 @@ export interface ResponseContext {
 }
 
 function processOf(version: VersionFacts) {
-  return { id: version.profileId, name: version.name, version: version.number, latestVersion: version.latestVersion };
+  return { id: version.profileId, name: version.profileName, version: version.number, latestVersion: version.latestVersion };
 }
 
 function savedAs(row: ExtractionEntity) {

@@ -50,8 +50,7 @@ export interface ResolvedProcess {
 /** A process version as other modules show it: its number, and its profile's newest. */
 export interface VersionFacts {
   profileId: string;
-  /** The profile's name (as `name` for extractions, `profileName` for sheets). */
-  name: string;
+  /** The profile's name. */
   profileName: string;
   number: number;
   latestVersion: number;
@@ -276,7 +275,7 @@ export class ProcessesService {
     const ids = [...new Set(versionIds)];
     if (ids.length === 0) return new Map();
     const rows = await manager.getRepository(ProcessVersionEntity).find({ where: { id: In(ids) }, relations: { profile: true } });
-    return new Map(rows.map((row) => [row.id, { profileId: row.profileId, name: row.profile.name, profileName: row.profile.name, number: row.number, latestVersion: row.profile.latestVersion }]));
+    return new Map(rows.map((row) => [row.id, { profileId: row.profileId, profileName: row.profile.name, number: row.number, latestVersion: row.profile.latestVersion }]));
   }
 
   /**
