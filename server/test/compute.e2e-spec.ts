@@ -1,5 +1,5 @@
 import { BF180G, computeSweep } from '@channelwright/shared/device';
-import { MAX_SWEEP_POINTS, MAX_SWEEP_TOTAL_POINTS } from '@channelwright/shared/schemas';
+import { MAX_SWEEP_POINTS, MAX_SWEEP_TOTAL_POINTS, type SweepRequestInput } from '@channelwright/shared/schemas';
 import { DEMO_ACCOUNTS } from '../src/seed/demo-accounts.js';
 import { bearer, createTestApp, type TestApp } from './helpers/test-app.js';
 
@@ -92,8 +92,9 @@ describe('compute API', () => {
   });
 
   describe('a large sweep (more points than the server computes on its own thread)', () => {
-    const large = {
+    const large: SweepRequestInput = {
       ...sizeBody,
+      polarity: 'nmos',
       model: 'all-region',
       vov: undefined,
       w: 5e-6,
@@ -101,7 +102,7 @@ describe('compute API', () => {
       sweep: { param: 'vgs', from: 0, to: 1.8, points: 2000, scale: 'lin' },
       corners: ['TT', 'SS', 'FF'],
       temperatures: [-40, 27, 125],
-    } as const;
+    };
 
     it('answers 18,000 points computed by a worker thread exactly as the engine answers them here, in both layouts', async () => {
       for (const layout of ['points', 'columns'] as const) {

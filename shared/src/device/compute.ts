@@ -30,13 +30,23 @@ import { zeroTemperatureCoefficientVgs } from './zero-temperature-coefficient.js
  * Model "table" interpolates in the tables of the stored process version, which the caller finds (`tables`).
  */
 
+/**
+ * Stored processes already checked, by object: the server hands the same (frozen) parsed version on every request, so
+ * it is checked once rather than on every call (a memo only: an object not seen before is always checked).
+ */
+const checkedProcesses = new WeakMap<object, Process>();
+
 function resolveProcess(inline: Process | undefined, given: Process | undefined): Process {
   if (given !== undefined) {
+    const known = typeof given === 'object' && given !== null && Object.isFrozen(given) ? checkedProcesses.get(given) : undefined;
+    if (known) return known;
     const result = processSchema.safeParse(given);
     if (!result.success) {
       const issue = result.error.issues[0];
       throw new EngineError('PROCESS_INVALID', `The stored process is not valid: ${issue.message}`, `process.${fieldOfIssue(issue) ?? ''}`.replace(/\.$/, ''));
     }
+    // Only a frozen object is remembered: one that can still change must be checked again.
+    if (Object.isFrozen(given)) checkedProcesses.set(given, result.data);
     return result.data;
   }
   if (inline === undefined) throw new EngineError('PROCESS_REQUIRED', 'No process: give an inline process, or resolve processId before computing', 'processId');
