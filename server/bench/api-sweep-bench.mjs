@@ -2,12 +2,12 @@
 // 3 temperatures (30,000 operating points, four fields each: VGS, ID, gm, VT) answered by the real API over HTTP, from
 // the start of the request to its last byte, against ngspice running the same 30,000 level-1 device
 // points in one batch run (start-up included) on the same machine.
-import { execFileSync, spawn } from 'node:child_process';
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { execFileSync, fork } from 'node:child_process';
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { freePort, waitForHealth } from './bench-server.mjs';
+import { demoDesignerToken, startDemoServer } from './bench-server.mjs';
 import { performance } from 'node:perf_hooks';
 import { BF180G } from '@channelwright/shared/device';
 
@@ -22,42 +22,77 @@ const device = { polarity: 'nmos', model: 'all-region', id: 20e-6, w: 10e-6, l: 
 const median = (values) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)];
 
 
+const mainJs = join(here, '../dist/main.js');
+
+/** Start-to-last-byte times of the 30,000-point sweep in one layout. */
+async function timeSweep(base, headers, layout) {
+  const body = JSON.stringify({ ...device, process: BF180G, sweep, corners, temperatures, fields: ['id', 'gm', 'vt'], layout });
+  const times = [];
+  let bytes = 0;
+  let points = 0;
+  for (let run = 0; run < RUNS + 3; run++) {
+    const start = performance.now();
+    const response = await fetch(`${base}/api/compute/sweep`, { method: 'POST', headers, body });
+    const received = await response.arrayBuffer(); // the last byte has arrived
+    const elapsed = performance.now() - start;
+    const text = Buffer.from(received).toString('utf8');
+    if (response.status !== 200) throw new Error(`sweep answered ${response.status}: ${text.slice(0, 300)}`);
+    if (run >= 3) times.push(elapsed); // the first runs warm the JIT
+    bytes = received.byteLength;
+    const answer = JSON.parse(text);
+    points = answer.series.reduce((n, s) => n + (s.points ? s.points.length : s.length), 0);
+  }
+  return { median: median(times), best: Math.min(...times), bytes, points };
+}
+
+/** The largest sweep the API allows: 10,000 points × 5 corners × 2 temperatures = 100,000 points, every field. */
+const largest = { ...device, process: BF180G, sweep: { ...sweep, points: 10_000 }, corners, temperatures: [27, 125] };
+
+/** Health latencies (ms) sampled by one caller at a time, in a process of its own, while `work` runs. */
+async function healthDuring(base, work) {
+  const sampler = fork(join(here, 'health-sampler.mjs'), [base], { stdio: ['ignore', 'ignore', 'inherit', 'ipc'] });
+  const latenciesOf = new Promise((resolve) => sampler.once('message', resolve));
+  await new Promise((r) => setTimeout(r, 300)); // the sampler is calling
+  const started = performance.now();
+  const result = await work();
+  const elapsed = performance.now() - started;
+  sampler.send('stop');
+  const sorted = [...(await latenciesOf)].sort((a, b) => a - b);
+  return { result, elapsed, samples: sorted.length, p50: sorted[Math.floor(sorted.length * 0.5)], p99: sorted[Math.min(sorted.length - 1, Math.floor(sorted.length * 0.99))], max: sorted.at(-1) };
+}
+
+async function largestSweep(base, headers, layout) {
+  const response = await fetch(`${base}/api/compute/sweep`, { method: 'POST', headers, body: JSON.stringify({ ...largest, layout }) });
+  const received = await response.arrayBuffer();
+  if (response.status !== 200) throw new Error(`the largest sweep answered ${response.status}`);
+  return received.byteLength;
+}
+
+/** Peak resident memory of a process so far (VmHWM), in MB. */
+function peakMemoryMb(pid) {
+  const status = readFileSync(`/proc/${pid}/status`, 'utf8');
+  const kb = Number(/VmHWM:\s+(\d+)/.exec(status)?.[1] ?? NaN);
+  return kb / 1024;
+}
+
 async function benchApi() {
-  const dataDir = mkdtempSync(join(tmpdir(), 'channelwright-bench-'));
-  const port = await freePort();
-  const server = spawn(process.execPath, [join(here, '../dist/main.js')], {
-    env: { ...process.env, PORT: String(port), DATA_DIR: dataDir, SEED_DEMO: 'true', NODE_ENV: 'development' },
-    stdio: 'ignore',
-  });
-  const base = `http://127.0.0.1:${port}`;
+  const { base, stop, pid } = await startDemoServer(mainJs);
   try {
-    await waitForHealth(base);
-    const login = await fetch(`${base}/api/auth/login`, {
-      method: 'POST',
-      headers: { 'content-type': 'application/json' },
-      body: JSON.stringify({ email: 'designer@brackenfold.example', password: 'wrenmoss-demo' }),
-    });
-    const { accessToken } = await login.json();
-    const body = JSON.stringify({ ...device, process: BF180G, sweep, corners, temperatures, fields: ['id', 'gm', 'vt'] });
-    const headers = { 'content-type': 'application/json', authorization: `Bearer ${accessToken}` };
-    const times = [];
-    let bytes = 0;
-    let points = 0;
-    for (let run = 0; run < RUNS + 3; run++) {
-      const start = performance.now();
-      const response = await fetch(`${base}/api/compute/sweep`, { method: 'POST', headers, body });
-      const received = await response.arrayBuffer(); // the last byte has arrived
-      const elapsed = performance.now() - start;
-      const text = Buffer.from(received).toString('utf8');
-      if (response.status !== 200) throw new Error(`sweep answered ${response.status}: ${text.slice(0, 300)}`);
-      if (run >= 3) times.push(elapsed); // the first runs warm the JIT
-      bytes = text.length;
-      points = JSON.parse(text).series.reduce((n, s) => n + s.points.length, 0);
+    const token = await demoDesignerToken(base, mainJs);
+    const headers = { 'content-type': 'application/json', authorization: `Bearer ${token}` };
+    const points = await timeSweep(base, headers, 'points');
+    const columns = await timeSweep(base, headers, 'columns');
+    const idle = await healthDuring(base, () => new Promise((r) => setTimeout(r, 2000)));
+    const during = {};
+    for (const layout of ['points', 'columns']) {
+      await largestSweep(base, headers, layout); // warm-up
+      during[layout] = await healthDuring(base, () => largestSweep(base, headers, layout));
     }
-    return { median: median(times), best: Math.min(...times), bytes, points };
+    const before = peakMemoryMb(pid);
+    const three = await healthDuring(base, () => Promise.all([0, 1, 2].map(() => largestSweep(base, headers, 'points'))));
+    return { points, columns, idle, during, three, memory: { before, after: peakMemoryMb(pid) } };
   } finally {
-    server.kill('SIGTERM');
-    rmSync(dataDir, { recursive: true, force: true });
+    stop();
   }
 }
 
@@ -108,13 +143,23 @@ function benchNgspice() {
 }
 
 const api = await benchApi();
-process.stdout.write(`\nAPI sweep: ${api.points.toLocaleString('en')} operating points, 4 fields each (VGS, ID, gm, VT), ${(api.bytes / 1e6).toFixed(2)} MB of JSON\n`);
-process.stdout.write(`  request start to last byte: median ${api.median.toFixed(1)} ms, best ${api.best.toFixed(1)} ms over ${RUNS} runs\n`);
+const mb = (bytes) => (bytes / 1e6).toFixed(2);
+process.stdout.write(`\nAPI sweep: ${api.points.points.toLocaleString('en')} operating points, 4 fields each (VGS, ID, gm, VT)\n`);
+process.stdout.write(`  layout "points":  ${mb(api.points.bytes)} MB of JSON, request start to last byte: median ${api.points.median.toFixed(1)} ms, best ${api.points.best.toFixed(1)} ms over ${RUNS} runs\n`);
+process.stdout.write(`  layout "columns": ${mb(api.columns.bytes)} MB of JSON, request start to last byte: median ${api.columns.median.toFixed(1)} ms, best ${api.columns.best.toFixed(1)} ms over ${RUNS} runs\n`);
+const health = (label, h, target) => process.stdout.write(`  /api/health ${label}: p50 ${h.p50.toFixed(1)} ms, p99 ${h.p99.toFixed(1)} ms, max ${h.max.toFixed(1)} ms over ${h.samples} calls${target ? `; target p99 < ${target} ms → ${h.p99 < target ? 'MET' : 'NOT MET'}` : ''}\n`);
+process.stdout.write('\nThe largest sweep the API allows (10,000 points × 5 corners × 2 temperatures = 100,000 points, all 27 fields):\n');
+health('idle', api.idle);
+for (const layout of ['points', 'columns']) health(`during it, layout "${layout}" (${mb(api.during[layout].result)} MB, answered in ${api.during[layout].elapsed.toFixed(0)} ms)`, api.during[layout], 50);
+health(`during three at once (layout "points", answered in ${api.three.elapsed.toFixed(0)} ms)`, api.three, 50);
+process.stdout.write(`  server peak resident memory: ${api.memory.before.toFixed(0)} MB before the three, ${api.memory.after.toFixed(0)} MB after; target < 2,048 MB → ${api.memory.after < 2048 ? 'MET' : 'NOT MET'}\n`);
 if (ngspiceAvailable()) {
   const spice = benchNgspice();
-  process.stdout.write(`ngspice level 1, the same 30,000 device points in one batch run (start-up included): median ${spice.median.toFixed(1)} ms, best ${spice.best.toFixed(1)} ms\n`);
-  const ratio = spice.median / api.median;
-  process.stdout.write(`  target: the API faster than ngspice → ${ratio >= 1 ? 'MET' : 'NOT MET'} (ngspice/API = ${ratio.toFixed(2)})\n`);
+  process.stdout.write(`\nngspice level 1, the same 30,000 device points in one batch run (start-up included): median ${spice.median.toFixed(1)} ms, best ${spice.best.toFixed(1)} ms\n`);
+  for (const layout of ['points', 'columns']) {
+    const ratio = spice.median / api[layout].median;
+    process.stdout.write(`  target: the API (layout "${layout}") faster than ngspice → ${ratio >= 1 ? 'MET' : 'NOT MET'} (ngspice/API = ${ratio.toFixed(2)})\n`);
+  }
 } else {
   process.stdout.write('ngspice not found: install it (apt-get install ngspice) to compare.\n');
 }

@@ -37,12 +37,28 @@ try {
   const health = await load({ requests: [{ method: 'GET', path: '/api/health' }] });
   const compute = await load({ requests: [{ method: 'POST', path: '/api/compute/size', headers, body: JSON.stringify(size) }] });
   const read = await load({ requests: [{ method: 'GET', path: `/api/sheets/${sheet.id}`, headers }] });
+  // Mixed: each connection reads the demo sheet four times, then adds a device (sized and stored, audited) to a sheet
+  // of its own kind: one write in five, as a team editing while others review.
+  const full = await api('GET', `/api/sheets/${sheet.id}`, accessToken);
+  const target = full.devices.find((d) => d.targets?.polarity === 'nmos')?.targets ?? full.devices[0].targets;
+  const scratch = await api('POST', `/api/projects/${project.id}/sheets`, accessToken, { name: `Bench writes ${Date.now()}`, processId: full.process.profileId, processVersion: full.process.version });
+  let written = 0;
+  const addDevice = {
+    method: 'POST',
+    path: `/api/sheets/${scratch.id}/devices`,
+    headers,
+    setupRequest: (request) => ({ ...request, body: JSON.stringify({ ...target, name: `MB${++written}` }) }),
+  };
+  const sheetRead = { method: 'GET', path: `/api/sheets/${sheet.id}`, headers };
+  const mixed = await load({ requests: [sheetRead, sheetRead, sheetRead, sheetRead, addDevice] });
 
   const ratio = (result) => result.requests.average / health.requests.average;
   process.stdout.write(`\nAuthenticated requests at ${CONNECTIONS} connections, ${SECONDS} s each (${mainJs}):\n`);
-  process.stdout.write(`${line('GET /api/health', health)}\n${line('POST /api/compute/size', compute)}\n${line(`GET /api/sheets/:id (${sheet.name})`, read)}\n`);
+  process.stdout.write(`${line('GET /api/health', health)}\n${line('POST /api/compute/size', compute)}\n${line(`GET /api/sheets/:id (${sheet.name})`, read)}\n${line('mixed: 4 reads, 1 device added', mixed)}\n`);
   process.stdout.write(`  compute/size: ratio ${ratio(compute).toFixed(2)} (target ≥ 0.60), p99 ${compute.latency.p99} ms (target < 25 ms) → ${ratio(compute) >= 0.6 && compute.latency.p99 < 25 ? 'MET' : 'NOT MET'}\n`);
   process.stdout.write(`  sheet read: ratio ${ratio(read).toFixed(2)} (target ≥ 0.40) → ${ratio(read) >= 0.4 ? 'MET' : 'NOT MET'}\n`);
+  const stored = await api('GET', `/api/sheets/${scratch.id}/devices`, accessToken);
+  process.stdout.write(`  mixed read/write: ratio ${ratio(mixed).toFixed(2)} to health (no target set), ${written} devices sent, ${stored.length} stored (every acknowledged write must be there)\n`);
 } finally {
   stop();
 }

@@ -50,7 +50,7 @@ export async function startDemoServer(mainJs, env = {}) {
     stop();
     throw error;
   }
-  return { base, stop };
+  return { base, stop, pid: server.pid };
 }
 
 /** An access token of the demo designer on a server started from `mainJs`'s build. */

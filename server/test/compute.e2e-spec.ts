@@ -1,5 +1,5 @@
-import { BF180G } from '@channelwright/shared/device';
-import { MAX_SWEEP_POINTS, MAX_SWEEP_TOTAL_POINTS } from '@channelwright/shared/schemas';
+import { BF180G, computeSweep } from '@channelwright/shared/device';
+import { MAX_SWEEP_POINTS, MAX_SWEEP_TOTAL_POINTS, type SweepRequestInput } from '@channelwright/shared/schemas';
 import { DEMO_ACCOUNTS } from '../src/seed/demo-accounts.js';
 import { bearer, createTestApp, type TestApp } from './helpers/test-app.js';
 
@@ -89,6 +89,35 @@ describe('compute API', () => {
     expect(tt(125).points[0].vt).toBeLessThan(tt(-40).points[0].vt);
     // … and more subthreshold current at VGS = 0.1 V (common practice, no source).
     expect(tt(125).points[10].id).toBeGreaterThan(tt(-40).points[10].id);
+  });
+
+  describe('a large sweep (more points than the server computes on its own thread)', () => {
+    const large: SweepRequestInput = {
+      ...sizeBody,
+      polarity: 'nmos',
+      model: 'all-region',
+      vov: undefined,
+      w: 5e-6,
+      hold: 'w',
+      sweep: { param: 'vgs', from: 0, to: 1.8, points: 2000, scale: 'lin' },
+      corners: ['TT', 'SS', 'FF'],
+      temperatures: [-40, 27, 125],
+    };
+
+    it('answers 18,000 points computed by a worker thread exactly as the engine answers them here, in both layouts', async () => {
+      for (const layout of ['points', 'columns'] as const) {
+        const response = await post('sweep', { ...large, layout });
+        expect(response.status).toBe(200);
+        expect(response.headers['content-type']).toMatch(/^application\/json/);
+        expect(response.body).toEqual(JSON.parse(JSON.stringify(computeSweep({ ...large, layout }))));
+      }
+    });
+
+    it('names the wrong field of a large sweep as a small one does (an unknown corner, found in the worker)', async () => {
+      const response = await post('sweep', { ...large, corners: ['TT', 'XX'] });
+      expect(response.status).toBe(400);
+      expect(response.body.field).toBe('corners.1');
+    });
   });
 
   it('runs a sized device over corners × temperatures and names the worst case of each figure', async () => {

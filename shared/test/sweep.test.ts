@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { BF180G, channelCurrentAt, computeSize, computeSweep, operatingPoint, prepareDevice, solveSize, sweepValues, thresholdAt } from '../src/device/index.js';
-import type { SweepRequestInput } from '../src/schemas/index.js';
+import { type SweepRequestInput, pointsOfColumns, sweepColumnsResponseSchema } from '../src/schemas/index.js';
 
 const device = { processId: 'bf180g', polarity: 'nmos', l: 0.5e-6, vds: 0.6, id: 20e-6, vov: 0.2 } as const;
 const run = (request: Partial<SweepRequestInput> & Pick<SweepRequestInput, 'sweep' | 'hold'>) => computeSweep({ ...device, ...request } as SweepRequestInput, BF180G);
@@ -132,5 +132,37 @@ describe('sweep series and fields', () => {
   it('answers 10,000 points per series', () => {
     const answer = run({ sweep: { param: 'vgs', from: 0, to: 1.8, points: 10_000 }, hold: 'w', fields: ['id'] });
     expect(answer.series[0].points).toHaveLength(10_000);
+  });
+});
+
+describe('sweep, layout "columns"', () => {
+  // The same engine run answered two ways: an array per field must hold exactly what the objects per point hold
+  // (a transposition, nothing recomputed), over corners, temperatures, regions, saturation and null points.
+  const request = { sweep: { param: 'vgs', from: -1, to: 1.8, points: 57 }, hold: 'w', corners: ['TT', 'SS'], temperatures: [-40, 125] } as const;
+
+  it('holds the same values as the points layout, one array per field and the swept value, nulls where a point has no answer', () => {
+    const points = run(request);
+    const columns = computeSweep({ ...device, ...request, layout: 'columns' }, BF180G);
+    expect(columns.layout).toBe('columns');
+    expect(sweepColumnsResponseSchema.safeParse(columns).success).toBe(true);
+    expect(columns.series).toHaveLength(4);
+    columns.series.forEach((series, k) => {
+      expect(series.length).toBe(57);
+      expect(Object.keys(series.columns).sort()).toEqual(Object.keys(points.series[k].points[0]).sort());
+      for (const column of Object.values(series.columns)) expect(column).toHaveLength(57);
+    });
+    expect(pointsOfColumns(columns).series).toEqual(points.series);
+    expect(columns.series[0].columns.region).toContain('weak');
+    expect(columns.series[0].columns.saturated).toContain(true);
+  });
+
+  it('is smaller as JSON: about half the bytes of the points layout for every field', () => {
+    const points = JSON.stringify(run(request)).length;
+    const columns = JSON.stringify(computeSweep({ ...device, ...request, layout: 'columns' }, BF180G)).length;
+    expect(columns / points).toBeLessThan(0.75);
+  });
+
+  it('refuses a layout it does not know, naming the field', () => {
+    expect(() => computeSweep({ ...device, ...request, layout: 'rows' } as unknown as SweepRequestInput, BF180G)).toThrow(/layout must be "points"/);
   });
 });

@@ -124,6 +124,16 @@ describe('computeSweep and computeCorners with model "table"', () => {
     expect(series.warnings.map((w) => w.code)).toContain('POINTS_WITHOUT_ANSWER');
   });
 
+  it('answers the columns layout as the points transposed', () => {
+    const ask = { ...request, hold: 'id', sweep: { param: 'gmId', from: 5, to: 40, points: 8 }, fields: ['id', 'gmId', 'w'] } as const;
+    const points = computeSweep(ask, undefined, tables);
+    const columns = computeSweep({ ...ask, layout: 'columns' }, undefined, tables);
+    expect(columns.series[0].columns.id).toEqual(points.series[0].points.map((p) => p.id));
+    expect(columns.series[0].columns.gmId).toEqual(points.series[0].points.map((p) => p.gmId));
+    expect(columns.series[0].length).toBe(8);
+    expect(columns.series[0].columns.id?.at(-1)).toBeNull();
+  });
+
   it('holds the width and VGS in an L sweep, the current following the table', () => {
     const result = computeSweep({ ...request, hold: 'w', sweep: { param: 'l', from: 0.25e-6, to: 1e-6, points: 4, scale: 'log' }, fields: ['id', 'w', 'vgs'] }, undefined, tables);
     const points = result.series[0].points;

@@ -7,9 +7,9 @@ import {
   sizeRequestSchema,
   sizeResponseSchema,
   sweepRequestSchema,
-  sweepResponseSchema,
+  sweepAnyResponseSchema,
 } from '@channelwright/shared/schemas';
-import { Body, Controller, HttpCode, Post } from '@nestjs/common';
+import { Body, Controller, HttpCode, Post, StreamableFile } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { ApiZodBody, ApiZodResponse } from '../common/openapi/api-zod.decorators.js';
 import { CurrentUser } from '../common/auth/current-user.decorator.js';
@@ -38,9 +38,11 @@ export class ComputeController {
   @Post('sweep')
   @HttpCode(200)
   @ApiZodBody(sweepRequestSchema, 'A device and a swept parameter, holding the current (re-size at each point) or the width')
-  @ApiZodResponse(200, sweepResponseSchema)
-  sweep(@Body() body: SweepRequestInput, @CurrentUser() user: Account) {
-    return this.compute.sweep(body, user);
+  @ApiZodResponse(200, sweepAnyResponseSchema)
+  async sweep(@Body() body: SweepRequestInput, @CurrentUser() user: Account) {
+    const answer = await this.compute.sweep(body, user);
+    // A large sweep comes back from its worker as JSON bytes, sent as they are.
+    return Buffer.isBuffer(answer) ? new StreamableFile(answer, { type: 'application/json; charset=utf-8', length: answer.length }) : answer;
   }
 
   @Post('corners')

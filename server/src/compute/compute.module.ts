@@ -3,11 +3,12 @@ import { CharacterisationModule } from '../characterisation/characterisation.mod
 import { ProcessesModule } from '../processes/processes.module.js';
 import { ComputeController } from './compute.controller.js';
 import { ComputeService } from './compute.service.js';
+import { SweepPool } from './sweep-pool.js';
 
 @Module({
   imports: [ProcessesModule, CharacterisationModule],
   controllers: [ComputeController],
-  providers: [ComputeService],
+  providers: [ComputeService, SweepPool],
   exports: [ComputeService],
 })
 export class ComputeModule {}

@@ -3,6 +3,7 @@ import {
   type CornersResponse,
   type SizeRequestInput,
   type SizeResponse,
+  type SweepColumnsResponse,
   type SweepRequestInput,
   type SweepResponse,
 } from '@channelwright/shared/schemas';
@@ -11,6 +12,7 @@ import { Injectable } from '@nestjs/common';
 import { CharacterisationTables } from '../characterisation/tables/characterisation-tables.service.js';
 import type { ProcessViewer } from '../processes/process-visibility.js';
 import { ProcessesService, type ResolvedProcess } from '../processes/processes.service.js';
+import { INLINE_SWEEP_POINTS, SweepPool, sweepPointsOf } from './sweep-pool.js';
 
 type ProcessSource = { processId?: unknown; processVersion?: unknown; model?: unknown; compare?: unknown; polarity?: unknown; flavour?: unknown };
 
@@ -25,6 +27,7 @@ export class ComputeService {
   constructor(
     private readonly processes: ProcessesService,
     private readonly tables: CharacterisationTables,
+    private readonly pool: SweepPool,
   ) {}
 
   async size(request: SizeRequestInput, viewer: ProcessViewer): Promise<SizeResponse> {
@@ -32,8 +35,14 @@ export class ComputeService {
     return computeSize(request, stored?.definition, await this.tablesFor(request, stored));
   }
 
-  async sweep(request: SweepRequestInput, viewer: ProcessViewer): Promise<SweepResponse> {
+  /**
+   * A sweep; a large one (more than INLINE_SWEEP_POINTS over all series) is computed and written as JSON by a worker
+   * thread and answered as those bytes. The table model stays here: its tables live in this thread's cache, and its
+   * sweeps are capped lower.
+   */
+  async sweep(request: SweepRequestInput, viewer: ProcessViewer): Promise<SweepResponse | SweepColumnsResponse | Buffer> {
     const stored = await this.storedProcess(request, viewer);
+    if (request?.model !== 'table' && sweepPointsOf(request) > INLINE_SWEEP_POINTS) return this.pool.sweepJson(request, stored?.definition);
     return computeSweep(request, stored?.definition, await this.tablesFor(request, stored));
   }
 

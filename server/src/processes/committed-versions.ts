@@ -20,6 +20,20 @@ const LIMIT = 64;
  */
 export class CommittedVersions {
   private readonly entries = new Map<string, VersionContent>();
+  /** Version id → the key of its entry (a sheet names its version by id). */
+  private readonly byVersionId = new Map<string, { profileId: string; key: string }>();
+
+  /** The content of a version by its id, with its profile's id; undefined when not kept. */
+  getById(versionId: string): { profileId: string; content: VersionContent } | undefined {
+    const entry = this.byVersionId.get(versionId);
+    if (!entry) return undefined;
+    const content = this.entries.get(entry.key);
+    if (!content) {
+      this.byVersionId.delete(versionId);
+      return undefined;
+    }
+    return { profileId: entry.profileId, content };
+  }
 
   get(profileId: string, number: number): VersionContent | undefined {
     const key = keyOf(profileId, number);
@@ -32,7 +46,13 @@ export class CommittedVersions {
   }
 
   keep(profileId: string, number: number, content: VersionContent): void {
-    if (this.entries.size >= LIMIT) this.entries.delete(this.entries.keys().next().value as string);
+    if (this.entries.size >= LIMIT) {
+      const oldest = this.entries.keys().next().value as string;
+      const evicted = this.entries.get(oldest);
+      this.entries.delete(oldest);
+      if (evicted) this.byVersionId.delete(evicted.versionId);
+    }
+    this.byVersionId.set(content.versionId, { profileId, key: keyOf(profileId, number) });
     this.entries.set(keyOf(profileId, number), deepFreeze({ version: content.version, versionId: content.versionId, definition: content.definition, card: content.card }));
   }
 }

@@ -265,9 +265,18 @@ export class ProcessesService {
 
   /** The same for a version id, as a sheet's foreign key holds it; 404 PROCESS_VERSION_NOT_FOUND (field processVersionId). */
   async resolveVersion(versionId: string, manager: EntityManager = this.unitOfWork.manager): Promise<ResolvedProcess> {
+    // Outside a transaction a committed version kept parsed saves reading its definition and card; the profile row
+    // (name, deprecation) is read every time.
+    const cached = manager === this.unitOfWork.manager ? this.committedVersions.getById(versionId) : undefined;
+    if (cached) {
+      const profile = await manager.getRepository(ProcessProfileEntity).findOneBy({ id: cached.profileId });
+      if (profile) return { profileId: profile.id, name: profile.name, deprecated: profile.deprecated, ...cached.content };
+    }
     const row = await manager.getRepository(ProcessVersionEntity).findOne({ where: { id: versionId }, relations: { profile: true } });
     if (!row) throw new DomainError('PROCESS_VERSION_NOT_FOUND', 'There is no process version with this id', 404, 'processVersionId');
-    return resolved(row.profile, row);
+    const result = resolved(row.profile, row);
+    if (manager === this.unitOfWork.manager) this.committedVersions.keep(row.profile.id, row.number, result);
+    return result;
   }
 
   /** Number, profile and the profile's newest version of each version id. */

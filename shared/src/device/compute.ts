@@ -1,7 +1,7 @@
 import { type CornersRequestInput, type CornersResponse, cornersRequestSchema } from '../schemas/corners.js';
 import { fieldOfIssue } from '../schemas/field-of-issue.js';
 import { type SizeRequest, type SizeRequestInput, type SizeResponse, sizeRequestSchema } from '../schemas/size.js';
-import { type SweepPoint, type SweepRequest, type SweepRequestInput, type SweepResponse, sweepRequestSchema } from '../schemas/sweep.js';
+import { type SweepColumn, type SweepColumnsResponse, type SweepField, type SweepPoint, type SweepRequest, type SweepRequestInput, type SweepResponse, sweepRequestSchema } from '../schemas/sweep.js';
 import { type Polarity, type Process, processSchema } from '../schemas/process.js';
 import type { Model } from '../schemas/request-fields.js';
 import { compareResults } from './compare-results.js';
@@ -30,13 +30,23 @@ import { zeroTemperatureCoefficientVgs } from './zero-temperature-coefficient.js
  * Model "table" interpolates in the tables of the stored process version, which the caller finds (`tables`).
  */
 
+/**
+ * Stored processes already checked, by object: the server hands the same (frozen) parsed version on every request, so
+ * it is checked once rather than on every call (a memo only: an object not seen before is always checked).
+ */
+const checkedProcesses = new WeakMap<object, Process>();
+
 function resolveProcess(inline: Process | undefined, given: Process | undefined): Process {
   if (given !== undefined) {
+    const known = typeof given === 'object' && given !== null && Object.isFrozen(given) ? checkedProcesses.get(given) : undefined;
+    if (known) return known;
     const result = processSchema.safeParse(given);
     if (!result.success) {
       const issue = result.error.issues[0];
       throw new EngineError('PROCESS_INVALID', `The stored process is not valid: ${issue.message}`, `process.${fieldOfIssue(issue) ?? ''}`.replace(/\.$/, ''));
     }
+    // Only a frozen object is remembered: one that can still change must be checked again.
+    if (Object.isFrozen(given)) checkedProcesses.set(given, result.data);
     return result.data;
   }
   if (inline === undefined) throw new EngineError('PROCESS_REQUIRED', 'No process: give an inline process, or resolve processId before computing', 'processId');
@@ -85,16 +95,60 @@ function runSweep(parsed: SweepRequest & { model: CurrentModel }, resolved: Proc
   return { result, head };
 }
 
-/** POST /api/compute/sweep: the columnar sweep turned into points, NaN and infinities as null. */
-export function computeSweep(request: SweepRequestInput, process?: Process, tables?: TableSource): SweepResponse {
+/** The answer of a sweep request: an object per point, or with layout "columns" an array per field. */
+export type ComputedSweep<R extends SweepRequestInput> = R extends { layout: 'columns' } ? SweepColumnsResponse : SweepResponse;
+
+/** POST /api/compute/sweep: the columnar sweep as points or as columns, NaN and infinities as null. */
+export function computeSweep<R extends SweepRequestInput>(request: R, process?: Process, tables?: TableSource): ComputedSweep<R>;
+export function computeSweep(request: SweepRequestInput, process?: Process, tables?: TableSource): SweepResponse | SweepColumnsResponse {
   const parsed = parseOrThrow(sweepRequestSchema, request);
   const resolved = resolveProcess(parsed.process, process);
   checkRequestAgainstProcess(parsed, resolved);
-  if (parsed.model === 'table') return sweepWithTable(parsed, resolved, tableOf(tables, parsed.polarity, parsed.flavour));
+  if (parsed.model === 'table') {
+    const answer = sweepWithTable(parsed, resolved, tableOf(tables, parsed.polarity, parsed.flavour));
+    return parsed.layout === 'columns' ? columnsOfPoints(answer) : answer;
+  }
   const { result, head } = runSweep({ ...parsed, model: parsed.model }, resolved);
+  if (parsed.layout === 'columns') {
+    return {
+      ...head,
+      layout: 'columns',
+      series: result.series.map((series) => ({ corner: series.corner, temperature: series.temperature, length: series.values.length, columns: columnsOf(result, series), warnings: series.warnings })),
+    };
+  }
   return {
     ...head,
     series: result.series.map((series) => ({ corner: series.corner, temperature: series.temperature, points: pointsOf(result, series), warnings: series.warnings })),
+  };
+}
+
+/** One array per field: the engine's columns with NaN and infinities as null, regions named, saturation as booleans. */
+function columnsOf(result: SweepColumns, series: SweepColumns['series'][number]): Partial<Record<SweepField, SweepColumn>> {
+  const { param } = result;
+  const { values, columns } = series;
+  const out: Partial<Record<SweepField, SweepColumn>> = { [param]: Array.from(values, finiteOrNull) };
+  for (const field of result.fields) {
+    if (field === param) continue;
+    if (field === 'region') out.region = Array.from(columns.ic as Float64Array, (ic) => (Number.isFinite(ic) ? regionOf(ic) : null));
+    else if (field === 'saturated') out.saturated = Array.from(columns.saturated as Float64Array, (s) => (Number.isNaN(s) ? null : s === 1));
+    else out[field] = Array.from(columns[field] as Float64Array, finiteOrNull);
+  }
+  return out;
+}
+
+const finiteOrNull = (value: number): number | null => (Number.isFinite(value) ? value : null);
+
+/** The table model answers points; the columns layout transposes them. */
+function columnsOfPoints(answer: SweepResponse): SweepColumnsResponse {
+  const names = [answer.param, ...answer.fields.filter((field) => field !== answer.param)] as SweepField[];
+  return {
+    ...answer,
+    layout: 'columns',
+    series: answer.series.map(({ points, ...rest }) => {
+      const columns: Partial<Record<SweepField, SweepColumn>> = {};
+      for (const name of names) columns[name] = points.map((point) => (point as Record<string, number | string | boolean | null | undefined>)[name] ?? null) as SweepColumn;
+      return { ...rest, length: points.length, columns };
+    }),
   };
 }
 
