@@ -19,8 +19,9 @@ const CARD = join(__dirname, 'fixtures/model-cards/test-250nm.lib');
 const GRID = { lengths: [0.25e-6, 0.5e-6, 1e-6], vgsStep: 0.025, vds: [0.1, 1.25, 2.5], vsb: [0, 0.8], corners: ['TT', 'FF'], temperatures: [27] };
 const W = 10e-6;
 
-// Fits run on worker threads at a low priority: on a busy machine one takes a while (no test times them).
-jest.setTimeout(240_000);
+// Characterisations and fits run on worker threads at a low priority: on a busy machine they take minutes (no test
+// times them; these limits only keep a hung run from waiting forever).
+jest.setTimeout(900_000);
 
 /** ID of the card's tn25 at TT, 27 °C, by native ngspice: one VGS sweep (0 … 2.5 V in `step`) per (L, VDS, VSB). */
 function simulated(curves: { l: number; vds: number; vsb: number }[], step: number): { vgs: number[]; id: number[][] } {
@@ -54,11 +55,11 @@ describe('fitting a profile from a characterised table', () => {
     designer = await t.loginAs(DEMO_ACCOUNTS.designer.email);
     processId = (await createCardProfile(t, admin, 'T250-fit')).id;
     const job = (await t.http().post('/api/characterisations').set(bearer(admin)).send({ processId, devices: [{ polarity: 'nmos' }], grid: GRID }).expect(202)).body;
-    const last = (await followJob(t, admin, job.id, jobFinished, 180_000)).at(-1);
+    const last = (await followJob(t, admin, job.id, jobFinished, 600_000)).at(-1);
     if (last?.status !== 'done') throw new Error(`the characterisation ended ${last?.status}: ${JSON.stringify(last?.error)}`);
     const tables = characterisationTableListSchema.parse((await t.http().get(`/api/processes/${processId}/tables`).set(bearer(admin)).expect(200)).body);
     table = tables.find((candidate) => candidate.current && candidate.polarity === 'nmos') as CharacterisationTable;
-  }, 240_000);
+  });
   afterAll(() => t?.close());
 
   const fromTable = (body: object, token = admin) => t.http().post('/api/extractions/from-table').set(bearer(token)).send({ processId, version: 1, polarity: 'nmos', corner: 'TT', ...body });

@@ -21,12 +21,14 @@ const list = (values: readonly number[], unit: string) => values.map((v) => form
  * value not on the grid is refused by the engine naming its field (400); more points than a file may have, here.
  */
 export function tableUpload(stored: { table: LookupTable; ref: TableRef }, version: { processId: string; processName: string; version: number }, device: { polarity: Polarity; flavour: string | null }, selection: TableSelection): TableUpload {
-  const points = pointsOfTable(stored.table, selection);
-  if (points.length > CURVE_FILE_MAX_POINTS) {
-    const field = selection.lengths === undefined ? 'lengths' : selection.vds === undefined ? 'vds' : selection.vsb === undefined ? 'vsb' : 'temperatures';
-    throw new DomainError('VALIDATION_FAILED', `This choice gives ${points.length} points; a fit reads at most ${CURVE_FILE_MAX_POINTS}: choose fewer lengths, VDS, VSB or temperatures`, 400, field);
-  }
   const { grid } = stored.table;
+  // Counted before the points are made: a whole table can hold millions.
+  const count = [selection.temperatures ?? grid.temperatures, selection.lengths ?? grid.lengths, selection.vds ?? grid.vds, selection.vsb ?? grid.vsb].reduce((n, values) => n * values.length, grid.vgs.count);
+  if (count > CURVE_FILE_MAX_POINTS) {
+    const field = selection.lengths === undefined ? 'lengths' : selection.vds === undefined ? 'vds' : selection.vsb === undefined ? 'vsb' : 'temperatures';
+    throw new DomainError('VALIDATION_FAILED', `This choice gives ${count} points; a fit reads at most ${CURVE_FILE_MAX_POINTS}: choose fewer lengths, VDS, VSB or temperatures`, 400, field);
+  }
+  const points = pointsOfTable(stored.table, selection);
   const origin: TableOrigin = {
     processId: version.processId,
     processName: version.processName,
@@ -40,11 +42,10 @@ export function tableUpload(stored: { table: LookupTable; ref: TableRef }, versi
     corner: selection.corner,
   };
   const deviceName = `${device.polarity.toUpperCase()}${device.flavour ? ` ${device.flavour}` : ''}`;
-  const chosen = (values: readonly number[] | undefined, all: readonly number[]) => values ?? all;
   const comments = [
     `Points of a characterised table, not measured: ${version.processName} version ${version.version}, ${deviceName} (card model ${origin.model}), corner ${origin.corner}`,
     `Table ${origin.tableId} (SHA-256 ${origin.sha256}) of characterisation ${origin.characterisationId}`,
-    `Temperatures ${list(chosen(selection.temperatures, grid.temperatures), '°C')}; L ${list(chosen(selection.lengths, grid.lengths), 'm')}; VDS ${list(chosen(selection.vds, grid.vds), 'V')}; VSB ${list(chosen(selection.vsb, grid.vsb), 'V')}; W ${list([grid.referenceWidth], 'm')} (the table's reference width)`,
+    `Temperatures ${list(selection.temperatures ?? grid.temperatures, '°C')}; L ${list(selection.lengths ?? grid.lengths, 'm')}; VDS ${list(selection.vds ?? grid.vds, 'V')}; VSB ${list(selection.vsb ?? grid.vsb, 'V')}; W ${list([grid.referenceWidth], 'm')} (the table's reference width)`,
     ...(device.polarity === 'pmos' ? ['A PMOS in the positive convention: VSG, VSD, VBS and the source-to-drain current'] : []),
   ];
   const fileName = `${version.processName}-v${version.version}-${deviceName.replace(/\s+/g, '-').toLowerCase()}-${origin.corner}-table.csv`.replace(/[^\w.+-]+/g, '_').slice(0, 255);
