@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { type CurveFileOptions, readCurveFile } from '../src/curve-file/index.js';
+import { type CurveFileOptions, readCurveFile, writeCurveFile } from '../src/curve-file/index.js';
 
 // Invented test curves: numbers chosen to show how the file is read, not measured on any device.
 const nmos: CurveFileOptions = { polarity: 'nmos', w: '10u', l: '1 µm' };
@@ -171,5 +171,31 @@ describe('refusing a broken curve file, naming row and column', () => {
     const problems = problemsOf(`${header}\n${rows.join('\n')}`);
     expect(problems).toHaveLength(101);
     expect(problems[100].message).toBe('… and 50 more problems');
+  });
+});
+
+describe('writing a curve file', () => {
+  // Invented points with the awkward numbers a grid gives (a sum of steps, a float32 current).
+  const points = [0.3, 0.1 + 0.2, 0.7, 0.9, 1.1].map((vgs, k) => ({ vgs: vgs + k * 0.05, vds: 1.25, vsb: 0.5, temperature: 27, w: 10e-6, l: 0.25e-6, id: Math.fround(1.234567e-5 * (k + 1)) }));
+
+  it('is read back as the same points, with its comments skipped, for an NMOS and for a PMOS in the positive convention', () => {
+    for (const polarity of ['nmos', 'pmos'] as const) {
+      const text = writeCurveFile(polarity, points, ['Points of a characterised table', 'second line']);
+      expect(text.split('\n').slice(0, 2)).toEqual(['# Points of a characterised table', '# second line']);
+      const file = read(text, { polarity });
+      expect(file.convention).toBe('positive');
+      file.points.forEach((p, k) => {
+        expect(p).toMatchObject({ vds: 1.25, vsb: 0.5, temperature: 27, fingers: 1 });
+        expect(Math.abs(p.vgs - points[k].vgs)).toBeLessThan(1e-12);
+        expect(Math.abs(p.w / 10e-6 - 1) + Math.abs(p.l / 0.25e-6 - 1)).toBeLessThan(1e-12);
+        expect(Math.abs(p.id / points[k].id - 1)).toBeLessThan(1e-8);
+      });
+    }
+  });
+
+  it('names a PMOS\'s columns from the source side, and writes sums of steps without their binary noise', () => {
+    const text = writeCurveFile('pmos', points);
+    expect(text.split('\n')[0]).toBe('VSG [V],VSD [V],VBS [V],T [°C],W [um],L [um],NF,ISD [A]');
+    expect(text).not.toMatch(/0000000000/);
   });
 });

@@ -60,7 +60,7 @@ describe.runIf(ngspiceAvailable || onCi)('extraction from a characterised table 
   it('reads only the chosen values of an axis, and refuses a value or a corner the table does not have', () => {
     const points = pointsOfTable(table, { corner: 'FF', vds: [3], vsb: [0, 1] });
     expect(new Set(points.map((p) => `${p.vds}/${p.vsb}`))).toEqual(new Set(['3/0', '3/1']));
-    expect(() => pointsOfTable(table, { corner: 'TT', vds: [2] })).toThrow(/2 is not a vds of the table/);
+    expect(() => pointsOfTable(table, { corner: 'TT', vds: [2] })).toThrow(/2 V is not a VDS of the table \(it has 100 mV, 1.5 V, 3 V\)/);
     expect(() => pointsOfTable(table, { corner: 'SS' })).toThrow(/no corner SS/);
   });
 });

@@ -1,13 +1,13 @@
 import type { CurveFile } from '@channelwright/shared/curve-file';
-import type { Extraction, ExtractionOptions, ExtractionResultResponse, ExtractionSummary } from '@channelwright/shared/schemas';
+import type { Extraction, ExtractionOptions, ExtractionResultResponse, ExtractionSummary, TableOrigin } from '@channelwright/shared/schemas';
 import type { VersionFacts } from '../processes/processes.service.js';
 import { toUserRef } from '../users/user-ref.js';
 import type { UserCard } from '../users/users.service.js';
 import type { ExtractionUploadEntity } from './extraction-upload.entity.js';
 import type { ExtractionEntity } from './extraction.entity.js';
 
-/** What reading an upload found, as kept with it. */
-export type UploadReading = Pick<CurveFile, 'convention' | 'notes' | 'curves'> & { points: number };
+/** What reading an upload found, as kept with it; for points written from a characterised table, that table. */
+export type UploadReading = Pick<CurveFile, 'convention' | 'notes' | 'curves'> & { points: number; table?: TableOrigin };
 
 /** The upload without its bytes. */
 export type UploadFacts = Omit<ExtractionUploadEntity, 'content'>;
@@ -28,7 +28,7 @@ function savedAs(row: ExtractionEntity) {
 
 /** An extraction as the API answers it (the per-point curves come from GET /:id/points). */
 export function toExtraction(row: ExtractionEntity, { upload, version, users }: ResponseContext): Extraction {
-  const reading = JSON.parse(upload.reading) as UploadReading;
+  const { table, ...reading } = JSON.parse(upload.reading) as UploadReading;
   return {
     id: row.id,
     status: row.status,
@@ -37,7 +37,7 @@ export function toExtraction(row: ExtractionEntity, { upload, version, users }: 
     process: processOf(version),
     polarity: row.polarity,
     options: JSON.parse(row.options) as ExtractionOptions,
-    source: { kind: 'upload', uploadId: upload.id, fileName: upload.fileName, sha256: upload.sha256, bytes: upload.bytes, ...reading },
+    source: { kind: 'upload', table: table ?? null, uploadId: upload.id, fileName: upload.fileName, sha256: upload.sha256, bytes: upload.bytes, ...reading },
     result: row.result === null ? null : (JSON.parse(row.result) as ExtractionResultResponse),
     error: row.error === null ? null : (JSON.parse(row.error) as { code: string; message: string }),
     savedAs: savedAs(row),

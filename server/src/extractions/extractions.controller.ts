@@ -2,6 +2,8 @@ import {
   CURVE_FILE_MAX_BYTES,
   type Extraction,
   extractionCurvesSchema,
+  type ExtractionFromTableRequest,
+  extractionFromTableRequestSchema,
   extractionListSchema,
   extractionSchema,
   type ExtractionSummary,
@@ -67,6 +69,18 @@ export class ExtractionsController {
   ): Promise<Extraction> {
     if (!file) throw new DomainError('FILE_REQUIRED', 'Attach the curve file in the multipart field "file"', 400, 'file');
     return this.extractions.create(file, fields, user);
+  }
+
+  @Post('from-table')
+  @HttpCode(202)
+  @ApiZodBody(extractionFromTableRequestSchema, 'A process version\'s device (polarity, flavour) whose current characterised table is read at one corner, optionally fewer temperatures, lengths, VDS and VSB, and the fit\'s options')
+  @ApiZodResponse(
+    202,
+    extractionSchema,
+    'The table\'s points kept as an upload (a CSV whose "#" lines name the process, version, table, its hash and the corner) with its queued fit; 400 CORNER_NOT_IN_TABLE or VALIDATION_FAILED naming the field of a value not on the grid; 409 TABLE_NOT_CHARACTERISED / TABLE_NOT_READY without a finished table; nothing is stored on a refusal',
+  )
+  createFromTable(@Body(new ZodValidationPipe(extractionFromTableRequestSchema)) request: ExtractionFromTableRequest, @CurrentUser() user: Account): Promise<Extraction> {
+    return this.extractions.createFromTable(request, user);
   }
 
   @Get()

@@ -5,6 +5,7 @@ import {
   type ExtractionOptions,
   type ExtractionResultResponse,
   type ExtractionSummary,
+  type ExtractionFromTableRequest,
   type ExtractionUploadFields,
   extractionOptionsSchema,
   type ProcessProfile,
@@ -18,11 +19,12 @@ import { In, IsNull, type Repository } from 'typeorm';
 import { AuditService } from '../audit/audit.service.js';
 import { conflict, DomainError, notFound } from '../common/errors/domain-error.js';
 import { UnitOfWork } from '../database/unit-of-work.js';
+import { CharacterisationTables } from '../characterisation/tables/characterisation-tables.service.js';
 import { isProcessMaintainer } from '../processes/process-maintainer.guard.js';
-import { ProcessesService } from '../processes/processes.service.js';
+import { ProcessesService, type ResolvedProcess } from '../processes/processes.service.js';
 import type { Account } from '../users/users.service.js';
 import { UsersService } from '../users/users.service.js';
-import { extractionSavedAudit } from './extraction-audit.js';
+import { extractionSavedAudit, uploadSource } from './extraction-audit.js';
 import { toExtraction, toExtractionSummary, type UploadFacts, type UploadReading } from './extraction-response.js';
 import { ExtractionUploadEntity } from './extraction-upload.entity.js';
 import { ExtractionEntity } from './extraction.entity.js';
@@ -30,6 +32,7 @@ import { ExtractionJobStore } from './jobs/extraction-job-store.js';
 import { ExtractionRunner } from './jobs/extraction-runner.js';
 import { ExtractionWorkers } from './jobs/extraction-workers.js';
 import { curveFileInvalid, decodeCurveFile } from './read-upload.js';
+import { tableUpload } from './table-upload.js';
 
 /** The part of an upload the service reads (multer's memory storage). */
 export interface UploadedCurveFile {
@@ -62,6 +65,7 @@ export class ExtractionsService {
     private readonly workers: ExtractionWorkers,
     private readonly runner: ExtractionRunner,
     private readonly store: ExtractionJobStore,
+    private readonly tables: CharacterisationTables,
   ) {}
 
   /**
@@ -83,22 +87,73 @@ export class ExtractionsService {
       maxIterations: fields.maxIterations,
       minGmId: fields.minGmId ?? null,
     });
+    return this.keepAndQueue(
+      { fileName: file.originalname.slice(0, 255) || 'curves.csv', content: file.buffer, readOptions, reading: summary },
+      { base, polarity: fields.polarity, options },
+      user,
+    );
+  }
+
+  /**
+   * A fit of the current table of a version's device (polarity and flavour), read at one corner and the chosen values
+   * of its axes: the table's points are written as the CSV an upload is (with "#" lines naming the process, version,
+   * table, its hash and the corner) and kept as an upload, so the job, re-run and audit paths are those of an upload.
+   * 409 TABLE_NOT_CHARACTERISED / TABLE_NOT_READY (field polarity) without a finished table; 400 naming the field for
+   * a corner or an axis value the table does not have; 404 when the viewer may not see the profile. Nothing is stored
+   * on a refusal.
+   */
+  async createFromTable(request: ExtractionFromTableRequest, user: Account): Promise<Extraction> {
+    const base = await this.baseVersion(request.processId, request.version, user);
+    const device = { polarity: request.polarity, flavour: request.flavour ?? null };
+    const stored = await this.tables.storedTable(base.versionId, device);
+    const { corner, temperatures, lengths, vds, vsb } = request;
+    const upload = tableUpload(stored, { processId: base.profileId, processName: base.name, version: base.version }, device, { corner, temperatures, lengths, vds, vsb });
+    const readOptions: CurveFileOptions = { polarity: request.polarity };
+    const reading = await this.workers.read(upload.text, readOptions);
+    // The table's lines are curves of its VGS axis; only a table of too few VGS values is refused here.
+    if (!reading.ok) throw curveFileInvalid(reading.problems);
+    const { points, convention, notes, curves } = reading.file;
+    const options = extractionOptionsSchema.parse({ model: request.model, fixed: request.fixed, noiseFloor: request.noiseFloor, maxIterations: request.maxIterations, minGmId: request.minGmId });
+    return this.keepAndQueue(
+      { fileName: upload.fileName, content: Buffer.from(upload.text, 'utf8'), readOptions, reading: { points: points.length, convention, notes, curves, table: upload.origin } },
+      { base, polarity: request.polarity, options },
+      user,
+    );
+  }
+
+  /** Keeps an upload with its queued fit in one transaction, and has a worker take it. */
+  private async keepAndQueue(
+    upload: { fileName: string; content: Buffer; readOptions: CurveFileOptions; reading: UploadReading },
+    fit: { base: ResolvedProcess; polarity: ExtractionEntity['polarity']; options: ExtractionOptions },
+    user: Account,
+  ): Promise<Extraction> {
     const id = await this.unitOfWork.run(async (manager) => {
-      const upload = await manager.getRepository(ExtractionUploadEntity).save(
-        manager.getRepository(ExtractionUploadEntity).create({
-          fileName: file.originalname.slice(0, 255) || 'curves.csv',
-          sha256: createHash('sha256').update(file.buffer).digest('hex'),
-          bytes: file.buffer.length,
-          content: file.buffer,
-          readOptions: JSON.stringify(readOptions),
-          reading: JSON.stringify(summary),
+      const uploads = manager.getRepository(ExtractionUploadEntity);
+      const saved = await uploads.save(
+        uploads.create({
+          fileName: upload.fileName,
+          sha256: createHash('sha256').update(upload.content).digest('hex'),
+          bytes: upload.content.length,
+          content: upload.content,
+          readOptions: JSON.stringify(upload.readOptions),
+          reading: JSON.stringify(upload.reading),
           uploadedById: user.id,
         }),
       );
-      return this.insertJob(manager.getRepository(ExtractionEntity), { uploadId: upload.id, processVersionId: base.versionId, polarity: fields.polarity, options, createdById: user.id, rerunOfId: null });
+      return this.insertJob(manager.getRepository(ExtractionEntity), { uploadId: saved.id, processVersionId: fit.base.versionId, polarity: fit.polarity, options: fit.options, createdById: user.id, rerunOfId: null });
     });
     await this.runner.enqueue();
     return this.get(id, user);
+  }
+
+  /** The base version a request names, if the viewer may see its profile; a missing version is named by the request's field "version". */
+  private async baseVersion(processId: string, version: number | undefined, user: Account): Promise<ResolvedProcess> {
+    try {
+      return await this.processes.resolveDefinition(processId, version, undefined, user);
+    } catch (error) {
+      if (error instanceof DomainError && error.field === 'processVersion') throw new DomainError(error.code, error.message, error.status, 'version');
+      throw error;
+    }
   }
 
   /** The same points fitted again with other options (absent ones as before), on the same base version. */
@@ -188,13 +243,14 @@ export class ExtractionsService {
       const problems = definition.error.issues.map((issue) => ({ field: issue.path.join('.'), message: `The fitted ${String(issue.path.at(-1) ?? 'value')} is not accepted: ${issue.message}` }));
       throw new DomainError('VALIDATION_FAILED', 'A fitted value lies outside what a profile accepts; nothing was saved', 400, problems[0]?.field, problems);
     }
+    const source = uploadSource(await this.uploadFacts(row.uploadId));
     const note = `(extraction ${row.id}, ${result.model} fit of the ${row.polarity.toUpperCase()})`;
-    const message = `${request.message ?? 'Parameters fitted to measured curves'} ${note}`.slice(0, 500);
+    const message = `${request.message ?? `Parameters fitted to ${source.table ? `the ${source.table.corner} lines of a characterised table of ${source.table.processName} version ${source.table.version}` : 'measured curves'}`} ${note}`.slice(0, 500);
     const saved = await this.unitOfWork.run(async (manager) => {
       const version = await this.processes.appendVersionIn(manager, base.profileId, { baseVersion: base.version, definition: definition.data, message }, user);
       const marked = await manager.getRepository(ExtractionEntity).update({ id: row.id, savedVersion: IsNull() }, { savedProfileId: version.profileId, savedVersion: version.number });
       if (marked.affected !== 1) throw conflict('EXTRACTION_ALREADY_SAVED', 'This fit was saved meanwhile; nothing more was saved');
-      await this.audit.record(manager, extractionSavedAudit(row.id, version, row.polarity, base.definition[row.polarity], result, user));
+      await this.audit.record(manager, extractionSavedAudit(row.id, version, row.polarity, base.definition[row.polarity], result, source, user));
       return version;
     });
     return this.processes.get(saved.profileId, user, saved.number);

@@ -66,7 +66,7 @@ export function level1CurveFile(sweep: Level1Sweep): string {
 }
 
 /** Runs a netlist with one `.dc` analysis in batch mode and reads the ASCII rawfile: one array per saved vector. */
-function runDc(netlist: string[], dc: string, saves: string[]): Map<string, number[]> {
+export function runDc(netlist: string[], dc: string, saves: string[]): Map<string, number[]> {
   const folder = mkdtempSync(join(tmpdir(), 'channelwright-level1-'));
   try {
     const text = [...netlist, `.save ${saves.join(' ')}`, '.control', 'set filetype=ascii', dc, 'write out.raw', '.endc', '.end'].join('\n');

@@ -4,3 +4,4 @@
  */
 export { type CurveFile, type CurveFileOptions, type CurveFileReading, MIN_POINTS, MIN_CURVE_POINTS, readCurveFile } from './read-curve-file.js';
 export { EXAMPLE_HEADER } from './curve-columns.js';
+export { writeCurveFile } from './write-curve-file.js';

@@ -1,5 +1,6 @@
 import { EngineError } from '../device/errors.js';
 import { type LookupTable, lineOffset, vgsOfNode } from '../device/lookup-table.js';
+import { formatQuantity } from '../units/format-quantity.js';
 import type { MeasuredPoint } from './measured-curves.js';
 
 /** Which lines of a characterised table an extraction reads: one corner, and optionally fewer values of each axis. */
@@ -13,11 +14,21 @@ export interface TableSelection {
   vsb?: readonly number[];
 }
 
-function indicesOf(axis: readonly number[], wanted: readonly number[] | undefined, field: string): number[] {
+/** How a refusal names each axis, in the words and units of a datasheet. */
+const AXES = {
+  temperatures: { name: 'temperature', unit: '°C' },
+  lengths: { name: 'length L', unit: 'm' },
+  vds: { name: 'VDS', unit: 'V' },
+  vsb: { name: 'VSB', unit: 'V' },
+} as const;
+
+function indicesOf(axis: readonly number[], wanted: readonly number[] | undefined, field: keyof typeof AXES): number[] {
   if (wanted === undefined) return axis.map((_, k) => k);
+  const { name, unit } = AXES[field];
+  const show = (value: number) => formatQuantity(value, unit, { digits: 6 });
   return wanted.map((value) => {
     const k = axis.findIndex((v) => Math.abs(v - value) <= 1e-9 * Math.max(1, Math.abs(v)));
-    if (k < 0) throw new EngineError('VALIDATION_FAILED', `${value} is not a ${field} of the table (it has ${axis.join(', ')})`, field);
+    if (k < 0) throw new EngineError('VALIDATION_FAILED', `${show(value)} is not a ${name} of the table (it has ${axis.map(show).join(', ')})`, field);
     return k;
   });
 }

@@ -62,6 +62,35 @@ export type ExtractionOptions = z.infer<typeof extractionOptionsSchema>;
 export const rerunExtractionRequestSchema = z.strictObject(optionFields).partial();
 export type RerunExtractionRequest = z.infer<typeof rerunExtractionRequestSchema>;
 
+/** A subset of a table axis: values on the grid, each once. */
+const axisSubset = (field: string, unit: string) =>
+  z
+    .array(z.number({ error: `${field} must be numbers in ${unit}` }).finite(`${field} must be finite numbers in ${unit}`), { error: `${field} must be a list of numbers in ${unit}` })
+    .min(1, `${field} must list at least one value (leave it out for every value of the table)`)
+    .max(100, `${field} may list at most 100 values`)
+    .refine((list) => new Set(list).size === list.length, `${field} lists a value twice`)
+    .optional();
+
+/**
+ * POST /api/extractions/from-table: fit a profile's parameters to the current characterised table of one of its
+ * versions' devices (polarity and flavour), read at one corner and optionally fewer temperatures, lengths, VDS and VSB
+ * (every value of the grid when absent; a value not on the grid is refused), with the same options as an upload.
+ */
+export const extractionFromTableRequestSchema = z.strictObject({
+  processId: z.string({ error: 'processId must be text' }).trim().min(1, 'processId must not be empty').max(200).describe('The profile whose version was characterised; the fit starts from that version'),
+  version: z.number({ error: 'version must be a whole number' }).int('version must be a whole number').positive('version must be at least 1').optional().describe('The latest version when absent'),
+  polarity: polaritySchema,
+  flavour: z.string({ error: 'flavour must be text' }).trim().min(1, 'flavour must not be empty').max(50).nullable().optional().describe('The flavour\'s table; the plain device when absent'),
+  corner: z.string({ error: 'corner must be text' }).trim().min(1, 'corner must not be empty').max(40).describe('A corner of the table, e.g. "TT"'),
+  temperatures: axisSubset('temperatures', '°C'),
+  lengths: axisSubset('lengths', 'm'),
+  vds: axisSubset('vds', 'V'),
+  vsb: axisSubset('vsb', 'V'),
+  ...extractionOptionsSchema.shape,
+});
+export type ExtractionFromTableRequest = z.infer<typeof extractionFromTableRequestSchema>;
+export type ExtractionFromTableRequestInput = z.input<typeof extractionFromTableRequestSchema>;
+
 /** A text field of a multipart upload holding a quantity ("2u", "2 µm", "2e-6"), read by the curve-file reader. */
 const quantityText = (field: string) => z.string({ error: `${field} must be text` }).trim().min(1, `${field} must not be empty`).max(40, `${field} must have at most 40 characters`);
 /** A number in a multipart text field. */
@@ -116,10 +145,26 @@ export const curveSummarySchema = z.object({
 });
 export type CurveSummary = z.infer<typeof curveSummarySchema>;
 
+/** The characterised table an upload's points were written from (POST /api/extractions/from-table). */
+export const tableOriginSchema = z.object({
+  processId: z.string(),
+  processName: z.string(),
+  version: z.number().int(),
+  polarity: polaritySchema,
+  flavour: z.string().nullable(),
+  tableId: z.string(),
+  sha256: z.string().describe('SHA-256 (hex) of the table\'s content'),
+  characterisationId: z.string(),
+  model: z.string().describe('The card model'),
+  corner: z.string(),
+});
+export type TableOrigin = z.infer<typeof tableOriginSchema>;
+
 /** Where an extraction's points came from. */
 export const extractionSourceSchema = z.discriminatedUnion('kind', [
   z.object({
     kind: z.literal('upload'),
+    table: tableOriginSchema.nullable().describe('The characterised table the points were written from; null for a file a user uploaded'),
     uploadId: z.string(),
     fileName: z.string(),
     sha256: z.string().describe('SHA-256 (hex) of the uploaded bytes as kept'),

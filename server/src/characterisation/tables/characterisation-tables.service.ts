@@ -1,4 +1,4 @@
-import { EngineError, type PreparedTable, type TableChoice, type TableGrid, type TableSource } from '@channelwright/shared/device';
+import { EngineError, type LookupTable, type PreparedTable, type TableChoice, type TableGrid, type TableSource } from '@channelwright/shared/device';
 import type { Polarity, TableRef } from '@channelwright/shared/schemas';
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
@@ -8,7 +8,7 @@ import { CharacterisationJobEntity } from '../jobs/characterisation-job.entity.j
 import { CharacterisationJobStore } from '../jobs/characterisation-job-store.js';
 import type { PlannedDevice } from '../jobs/characterisation-plan.js';
 import { CharacterisationTableEntity } from './characterisation-table.entity.js';
-import { TableCorruptError } from '../table-storage.js';
+import { TableCorruptError, unpackTable } from '../table-storage.js';
 import { PreparedTableCache } from './prepared-table-cache.js';
 
 /** A device of a process version: its polarity and flavour (undefined or null for the plain NMOS or PMOS). */
@@ -44,7 +44,7 @@ export class CharacterisationTables {
 
   constructor(
     @InjectRepository(CharacterisationTableEntity) private readonly tables: Repository<CharacterisationTableEntity>,
-    store: CharacterisationJobStore,
+    private readonly store: CharacterisationJobStore,
     config: AppConfigService,
   ) {
     this.cache = new PreparedTableCache(config.characterisation.tableCacheBytes, (id) => store.tableBytes(id));
@@ -106,6 +106,16 @@ export class CharacterisationTables {
       }
       throw new EngineError('TABLE_NOT_CHARACTERISED', `This process version has no ${label(device)} table: a maintainer characterises its model card first (or choose an analytic model)`, 'polarity');
     };
+  }
+
+  /**
+   * The current table of one device of a version as it was characterised (currents, not the logarithms a prepared table
+   * holds), with its reference: for reading its points as curves (an extraction). The refusals of tableSource.
+   */
+  async storedTable(processVersionId: string, device: DeviceKind): Promise<{ table: LookupTable; ref: TableRef }> {
+    const source = await this.tableSource(processVersionId, [device]);
+    const { ref } = source({ polarity: device.polarity, flavour: device.flavour ?? undefined });
+    return { table: await unpackTable(await this.store.tableBytes(ref.id), ref.sha256), ref };
   }
 
   /** A stored table ready for the table model, or the reason it cannot be read (its content no longer has its hash). */

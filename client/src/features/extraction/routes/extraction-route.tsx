@@ -22,10 +22,12 @@ export default function ExtractionRoute() {
   if (extraction.isError) return <ErrorPanel title="This extraction could not be loaded" message={extraction.error.message} onRetry={() => void extraction.refetch()} />;
   const job = extraction.data;
   const source = job.source;
+  const table = source.table;
+  const tableName = table ? `the ${table.corner} lines of the ${table.polarity.toUpperCase()}${table.flavour ? ` ${table.flavour}` : ''} table of ${table.processName} version ${table.version}` : null;
   return (
     <Stack gap="md">
       <PageHeader
-        title={`Fit of ${source.fileName}`}
+        title={tableName ? `Fit of ${tableName}` : `Fit of ${source.fileName}`}
         description={
           <>
             {job.polarity.toUpperCase()} on {job.process.name} version {job.process.version}, {MODEL_LABELS[job.options.model]}; {source.points} points in {source.curves.length} curves.{' '}
@@ -84,7 +86,8 @@ export default function ExtractionRoute() {
       )}
       <Group>
         <Text size="xs" c="dimmed">
-          Upload {source.fileName} ({source.bytes} bytes, SHA-256 {source.sha256.slice(0, 12)}…) is kept with this fit. Estimates: verify with the foundry&apos;s models and sign-off simulation.
+          {table ? `Points of the characterised table ${table.tableId} (card model ${table.model}, table SHA-256 ${table.sha256.slice(0, 12)}…) kept as ${source.fileName}` : `Upload ${source.fileName}`} ({source.bytes}{' '}
+          bytes, SHA-256 {source.sha256.slice(0, 12)}…) is kept with this fit. Estimates: verify with the foundry&apos;s models and sign-off simulation.
         </Text>
       </Group>
     </Stack>

@@ -1,5 +1,5 @@
 import { BF180G } from '@channelwright/shared/device';
-import { PARAMETER_CONVENTION, type Extraction, type ExtractionCurves, type ExtractionResultResponse, type ProcessProfile, type ProcessProfileSummary } from '@channelwright/shared/schemas';
+import { type CharacterisationTable, PARAMETER_CONVENTION, type Extraction, type ExtractionCurves, type ExtractionResultResponse, type ProcessProfile, type ProcessProfileSummary } from '@channelwright/shared/schemas';
 import { admin } from '../../../test/fixtures';
 
 // Invented demo data: the invented Brackenfold BF180-G profile, and a fit of invented level-1-like curves to it.
@@ -63,6 +63,7 @@ export function extractionOf(overrides: Partial<Extraction> = {}): Extraction {
     options: { model: 'square-law', fixed: [], noiseFloor: null, maxIterations: 300, minGmId: null },
     source: {
       kind: 'upload',
+      table: null,
       uploadId: 'u-1',
       fileName: 'level1.csv',
       sha256: 'ab'.repeat(32),
@@ -102,3 +103,32 @@ export const fittedCurves: ExtractionCurves = {
     },
   ],
 };
+
+/** An invented NMOS table of BF180-G version 1 (corners TT and FF, three lengths). */
+export const bf180NmosTable: CharacterisationTable = {
+  id: 't-nmos',
+  sha256: 'cd'.repeat(32),
+  characterisationId: 'c-1',
+  model: 'bfn18',
+  processId: 'p-bf180',
+  version: 1,
+  polarity: 'nmos',
+  flavour: null,
+  points: 3 * 3 * 2 * 2 * 101,
+  size: 1_000_000,
+  storedBytes: 400_000,
+  grid: { polarity: 'nmos', modelName: 'bfn18', referenceWidth: 10e-6, lengths: [0.18e-6, 0.5e-6, 1e-6], vgs: { start: 0, step: 0.018, count: 101 }, vds: [0.1, 0.9, 1.8], vsb: [0, 0.9], corners: ['TT', 'FF'], temperatures: [27, 85] },
+  current: true,
+  createdAt: '2026-12-01T08:00:00.000Z',
+};
+
+/** A fit of that table's TT lines, as the server answers it. */
+export const tableExtraction = (): Extraction =>
+  extractionOf({
+    source: {
+      ...extractionOf().source,
+      fileName: 'BF180-G-v1-nmos-TT-table.csv',
+      notes: [],
+      table: { processId: 'p-bf180', processName: 'BF180-G', version: 1, polarity: 'nmos', flavour: null, tableId: 't-nmos', sha256: 'cd'.repeat(32), characterisationId: 'c-1', model: 'bfn18', corner: 'TT' },
+    },
+  });
