@@ -138,11 +138,11 @@ describe('sweep series and fields', () => {
 describe('sweep, layout "columns"', () => {
   // The same engine run answered two ways: an array per field must hold exactly what the objects per point hold
   // (a transposition, nothing recomputed), over corners, temperatures, regions, saturation and null points.
-  const request = { sweep: { param: 'vgs', from: -1, to: 1.8, points: 57 }, hold: 'w', corners: ['TT', 'SS'], temperatures: [-40, 125] } as const;
+  const request = { sweep: { param: 'vgs' as const, from: -1, to: 1.8, points: 57 }, hold: 'w' as const, corners: ['TT', 'SS'], temperatures: [-40, 125] };
 
   it('holds the same values as the points layout, one array per field and the swept value, nulls where a point has no answer', () => {
     const points = run(request);
-    const columns = computeSweep({ ...device, ...request, layout: 'columns' }, BF180G);
+    const columns = computeSweep({ ...device, ...request, layout: 'columns' as const }, BF180G);
     expect(columns.layout).toBe('columns');
     expect(sweepColumnsResponseSchema.safeParse(columns).success).toBe(true);
     expect(columns.series).toHaveLength(4);
@@ -158,7 +158,7 @@ describe('sweep, layout "columns"', () => {
 
   it('is smaller as JSON: about half the bytes of the points layout for every field', () => {
     const points = JSON.stringify(run(request)).length;
-    const columns = JSON.stringify(computeSweep({ ...device, ...request, layout: 'columns' }, BF180G)).length;
+    const columns = JSON.stringify(computeSweep({ ...device, ...request, layout: 'columns' as const }, BF180G)).length;
     expect(columns / points).toBeLessThan(0.75);
   });
 

@@ -13,6 +13,7 @@ import {
   type TableSource,
 } from '../src/device/index.js';
 import { smoothDevice, synthesiseTable, thermalVoltageAt } from './synthetic-table.js';
+import type { SweepRequestInput } from '../src/schemas/index.js';
 
 // The table model through the compute API's three calls, on a table synthesised from a smooth all-region device (the
 // EKV interpolation of Enz, Krummenacher & Vittoz, 1995; see synthetic-table.ts), so that every figure has a known truth.
@@ -125,9 +126,9 @@ describe('computeSweep and computeCorners with model "table"', () => {
   });
 
   it('answers the columns layout as the points transposed', () => {
-    const ask = { ...request, hold: 'id', sweep: { param: 'gmId', from: 5, to: 40, points: 8 }, fields: ['id', 'gmId', 'w'] } as const;
+    const ask: SweepRequestInput = { ...request, hold: 'id', sweep: { param: 'gmId', from: 5, to: 40, points: 8 }, fields: ['id', 'gmId', 'w'] };
     const points = computeSweep(ask, undefined, tables);
-    const columns = computeSweep({ ...ask, layout: 'columns' }, undefined, tables);
+    const columns = computeSweep({ ...ask, layout: 'columns' as const }, undefined, tables);
     expect(columns.series[0].columns.id).toEqual(points.series[0].points.map((p) => p.id));
     expect(columns.series[0].columns.gmId).toEqual(points.series[0].points.map((p) => p.gmId));
     expect(columns.series[0].length).toBe(8);
