@@ -169,7 +169,7 @@ describeWithNgspice('parameter extraction through the API (curves from ngspice l
     const job = await finished(extractionSchema.parse((await upload(admin, clean, { model: 'all-region', maxIterations: '10' }).expect(202)).body).id);
     expect(job.status).toBe('done');
     expect(job.result!.converged).toBe(false);
-    expect(job.progress.maxIterations).toBe(20);
+    expect(job.progress.maxIterations).toBe(40);
     expect(job.result!.parameters.length).toBeGreaterThan(0);
     for (const parameter of job.result!.parameters) expect(Number.isFinite(parameter.value)).toBe(true);
   });

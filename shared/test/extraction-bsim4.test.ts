@@ -15,6 +15,8 @@ const LENGTHS = [0.18e-6, 0.25e-6, 0.36e-6, 0.5e-6, 0.72e-6, 1e-6, 1.4e-6, 1.8e-
 const DRAINS = [0.45, 0.9, 1.8];
 const BODIES = [0, 0.45, 0.9];
 const W_FIT = 10e-6;
+/** A narrow device at every length (VDS = 0.9 V, VSB = 0), so that the fit can tell ΔW: sizing at gm/ID = 5 S/A draws W down to 0.13 µm. */
+const W_NARROW = 0.5e-6;
 const TARGET_ID = 10e-6;
 
 interface Curve {
@@ -60,7 +62,10 @@ describe.runIf(ngspiceAvailable || onCi)('the all-region model fitted to an inve
   let fittedProcess: Process;
 
   beforeAll(() => {
-    const devices = LENGTHS.flatMap((l) => DRAINS.flatMap((vds) => BODIES.map((vsb) => ({ w: W_FIT, l, vds, vsb }))));
+    const devices = [
+      ...LENGTHS.flatMap((l) => DRAINS.flatMap((vds) => BODIES.map((vsb) => ({ w: W_FIT, l, vds, vsb })))),
+      ...LENGTHS.map((l) => ({ w: W_NARROW, l, vds: 0.9, vsb: 0 })),
+    ];
     const curves = sweep(devices, 0.02);
     const points: MeasuredPoint[] = [];
     curves.forEach((curve, k) => curve.vgs.forEach((vgs, p) => points.push({ vgs, ...devices[k], temperature: 27, id: curve.id[p] })));
@@ -70,14 +75,15 @@ describe.runIf(ngspiceAvailable || onCi)('the all-region model fitted to an inve
 
   it('converges, with the current density against gm/ID within 7 % RMS over the sizing range and the strong-inversion current within 10 % RMS', () => {
     expect(result.converged).toBe(true);
+    if (process.env.SHOW_ERRORS) console.log(`density RMS ${result.densityRms}, strong ${result.rms.find((r) => r.region === 'strong')?.rms}`, result.parameters.map((p) => `${p.name} = ${p.value.toPrecision(4)}`).join(', '));
     expect(result.densityRms).toBeLessThan(0.07);
     expect(result.rms.find((r) => r.region === 'strong')?.rms).toBeLessThan(0.1);
   });
 
-  // The target is ±10 %; the EKV charge relation and this card's moderate inversion differ by a bump of about
-  // ±10 % near gm/ID = 15 S/A that no first-order term follows (docs/extraction.md), so the bound here is the
-  // measured worst with a little room: +11.0 % at L = 1.8 µm, gm/ID = 15 S/A.
-  it('sizes W for 10 µA at gm/ID = 5 … 20 S/A within ±12 % of the card, from L = 0.18 to 1.8 µm', () => {
+  // The target of docs/extraction.md, ±10 %; measured worst −8.0 % at L = 0.5 µm, gm/ID = 20 S/A. What is left is
+  // the shape of moderate inversion: the EKV charge relation and this card differ by a bump of about ±6 % between
+  // gm/ID = 15 and 20 S/A that no first-order term follows.
+  it('sizes W for 10 µA at gm/ID = 5 … 20 S/A within ±10 % of the card, from L = 0.18 to 1.8 µm', () => {
     const errors: string[] = [];
     for (const l of [0.18e-6, 0.5e-6, 1e-6, 1.8e-6]) {
       for (const gmId of [5, 10, 15, 20]) {
@@ -85,7 +91,7 @@ describe.runIf(ngspiceAvailable || onCi)('the all-region model fitted to an inve
         const sized = computeSize({ processId: 'fit', polarity: 'nmos', id: TARGET_ID, l, vds: 0.9, vsb: 0, gmId }, fittedProcess).wRequired;
         const error = sized / expected - 1;
         if (process.env.SHOW_ERRORS) console.log(`W error L=${l} gmId=${gmId}: ${(error * 100).toFixed(1)} %`);
-        if (Math.abs(error) > 0.12) errors.push(`L = ${l * 1e6} µm, gm/ID = ${gmId}: ${(error * 100).toFixed(1)} %`);
+        if (Math.abs(error) > 0.1) errors.push(`L = ${l * 1e6} µm, gm/ID = ${gmId}: ${(error * 100).toFixed(1)} %`);
       }
     }
     expect(errors).toEqual([]);
@@ -102,6 +108,7 @@ describe.runIf(ngspiceAvailable || onCi)('the all-region model fitted to an inve
     const simulated = 1 / steepest;
     const n = result.fitted.n as number;
     const extracted = n * Math.LN10 * thermalVoltage(300.15);
+    if (process.env.SHOW_ERRORS) console.log(`swing: extracted ${extracted}, simulated ${simulated}`);
     expect(Math.abs(extracted / simulated - 1)).toBeLessThan(0.03);
   }, 60_000);
 });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { BF180G, channelTermsAt, computeSize, effectiveLength, kpAtLength, LONG_CHANNEL, mobilityExponentAt, prepareDevice } from '../src/device/index.js';
-import type { DeviceParams, Process } from '../src/schemas/index.js';
+import { BF180G, channelTermsAt, computeSize, computeSweep, effectiveLength, kpAtLength, LONG_CHANNEL, mobilityExponentAt, operatingPoint, prepareDevice } from '../src/device/index.js';
+import type { DeviceParams, Process, SweepRequestInput } from '../src/schemas/index.js';
 
 // The short-channel terms of the all-region model (docs/model.md §6.3) on an invented variant of the demo NMOS.
 const shortNmos: DeviceParams = { ...BF180G.nmos, dl: 20e-9, dw: 10e-9, theta0: 0.1, theta1: 60e-9, dibl: 0.04, diblExp: 1.5, pclm: 30e-9, muExpL: 0.1e-6 };
@@ -36,6 +36,30 @@ describe('short-channel terms', () => {
     const plain = computeSize(target, { ...BF180G, nmos: { ...shortNmos, dibl: undefined } });
     expect(plain.vt - result.vt).toBeCloseTo((result.eta as number) * target.vds, 12);
     expect(result.vgs - result.vt).toBeCloseTo(result.vov, 12);
+  });
+
+  it('divide β by 1 + θB·VSB (body-bias mobility, Tsividis & McAndrew 2011, ch. 4): the same ID and gm/ID take 1 + θB·VSB times the width, none more at VSB = 0', () => {
+    const plain: Process = { ...BF180G, nmos: { ...shortNmos, dw: undefined } };
+    const degraded: Process = { ...BF180G, nmos: { ...shortNmos, dw: undefined, thetaB: 0.1 } };
+    const biased = { ...target, vsb: 0.45 };
+    expect(computeSize(biased, degraded).wRequired / computeSize(biased, plain).wRequired).toBeCloseTo(1 + 0.1 * 0.45, 10);
+    expect(computeSize(biased, degraded).vt).toBe(computeSize(biased, plain).vt);
+    expect(computeSize(target, degraded).wRequired).toBe(computeSize(target, plain).wRequired);
+  });
+
+  it('carry θB through a VSB sweep: each point is the operating point at its VSB', () => {
+    const degraded: Process = { ...BF180G, nmos: { ...shortNmos, thetaB: 0.1 } };
+    const request = { processId: 'bf180g', polarity: 'nmos', l: 0.36e-6, vds: 0.9, vsb: 0, id: 20e-6, vov: 0.15, sweep: { param: 'vsb', from: 0, to: 0.9, points: 4 }, hold: 'w', fields: ['id'] };
+    const answer = computeSweep(request as SweepRequestInput, degraded);
+    const prepared = prepareDevice(degraded, 'nmos');
+    const vgs = answer.base.vgs as number;
+    for (const point of answer.series[0].points) {
+      const op = operatingPoint(prepared, 'all-region', answer.base.w, 0.36e-6, { vgs, vds: 0.9, vsb: point.vsb as number });
+      expect(Math.abs((point.id as number) / op.id - 1)).toBeLessThan(1e-12);
+    }
+    const first = answer.series[0].points[0].id as number;
+    const last = answer.series[0].points[3].id as number;
+    expect(last).toBeLessThan(first);
   });
 
   it('need a wider device for the same ID and gm/ID when mobility degrades (θ > 0)', () => {

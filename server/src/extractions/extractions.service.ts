@@ -1,5 +1,6 @@
 import { createHash } from 'node:crypto';
 import type { CurveFileOptions } from '@channelwright/shared/curve-file';
+import { FIT_STAGES } from '@channelwright/shared/extraction';
 import {
   type Extraction,
   type ExtractionOptions,
@@ -42,8 +43,6 @@ export interface UploadedCurveFile {
 
 /** Most extractions a list answers. */
 const LIST_LIMIT = 200;
-/** The stages of a fit, by model (the all-region fit has two), for the progress before the first report. */
-const STAGES = { 'square-law': 1, 'all-region': 2 } as const;
 
 /** The upload's columns without its bytes (a list or a job view never needs them). */
 const UPLOAD_FACTS = { id: true, fileName: true, sha256: true, bytes: true, readOptions: true, reading: true, uploadedById: true, createdAt: true } as const;
@@ -261,7 +260,7 @@ export class ExtractionsService {
     job: Pick<ExtractionEntity, 'uploadId' | 'processVersionId' | 'polarity' | 'createdById' | 'rerunOfId'> & { options: ExtractionOptions },
   ): Promise<string> {
     const saved = await rows.save(
-      rows.create({ ...job, options: JSON.stringify(job.options), status: 'queued', iterations: 0, maxIterations: job.options.maxIterations * STAGES[job.options.model], attempts: 0, cancelRequested: false }),
+      rows.create({ ...job, options: JSON.stringify(job.options), status: 'queued', iterations: 0, maxIterations: job.options.maxIterations * FIT_STAGES[job.options.model], attempts: 0, cancelRequested: false }),
     );
     return saved.id;
   }

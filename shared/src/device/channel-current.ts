@@ -1,4 +1,4 @@
-import { channelOf, slopeFactorOf, thresholdOf } from './channel.js';
+import { betaOf, channelOf, slopeFactorOf, thresholdOf } from './channel.js';
 import { type CurrentModel, drainCurrent } from './drain-current.js';
 import { type PreparedDevice } from './resolve-device.js';
 
@@ -6,5 +6,5 @@ import { type PreparedDevice } from './resolve-device.js';
 export function channelCurrentAt(device: PreparedDevice, model: CurrentModel, w: number, l: number, vgs: number, vds: number, vsb: number, fingers = 1): number {
   const channel = channelOf(device, model, w, l, fingers);
   const vov = vgs - thresholdOf(device, channel, vsb, vds);
-  return drainCurrent(model, channel.beta, slopeFactorOf(device, channel, vsb), device.ut, channel.lambda, vov, vds, channel.terms);
+  return drainCurrent(model, betaOf(channel, vsb), slopeFactorOf(device, channel, vsb), device.ut, channel.lambda, vov, vds, channel.terms);
 }

@@ -47,6 +47,15 @@ export function thresholdOf(device: PreparedDevice, channel: Pick<Channel, 'term
   return thresholdAt(device, vsb) + channel.terms.vtShift - channel.terms.eta * vds;
 }
 
+/**
+ * β of the channel at VSB, A/V²: kp·Weff/Leff ÷ (1 + θB·VSB). A body bias deepens the depletion charge, whose field
+ * adds to the vertical field the carriers feel, so the mobility falls (Tsividis & McAndrew 2011, ch. 4, from memory:
+ * µ = µ0/(1 + θ·VOV + θB·VSB), here as its own factor). θB = 0 for the square law and a profile without it.
+ */
+export function betaOf(channel: Pick<Channel, 'beta' | 'terms'>, vsb: number): number {
+  return channel.terms.thetaB === 0 ? channel.beta : channel.beta / (1 + channel.terms.thetaB * vsb);
+}
+
 /** The slope factor of the channel at VSB: the body's law (slopeFactor) plus its length's rise. */
 export function slopeFactorOf(device: PreparedDevice, channel: Pick<Channel, 'terms'>, vsb: number): number {
   return slopeFactor(device.params, vsb) + channel.terms.nShift;

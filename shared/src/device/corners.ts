@@ -1,7 +1,7 @@
 import { CORNER_FIGURES, type CornerFigure, type CornersRequest, type CornersResponse, WORSE_DIRECTION } from '../schemas/corners.js';
 import type { Warning } from '../schemas/warning.js';
 import { type Process, cornerNames } from '../schemas/process.js';
-import { channelOf, slopeFactorOf, thresholdOf } from './channel.js';
+import { betaOf, channelOf, slopeFactorOf, thresholdOf } from './channel.js';
 import type { CurrentModel } from './drain-current.js';
 import { EngineError, isEngineError } from './errors.js';
 import { type OperatingPoint, operatingPoint } from './operating-point.js';
@@ -69,7 +69,7 @@ function biasedOperatingPoint(device: PreparedDevice, request: CornersRequest & 
   let vgs = request.vgs as number;
   if (request.bias === 'current') {
     const id = request.id as number;
-    vgs = vt + overdriveForCurrent(model, channel.beta, slopeFactorOf(device, channel, vsb), device.ut, channel.lambda, vds, id, channel.terms);
+    vgs = vt + overdriveForCurrent(model, betaOf(channel, vsb), slopeFactorOf(device, channel, vsb), device.ut, channel.lambda, vds, id, channel.terms);
     if (vgs > device.vdd) {
       throw new EngineError('ID_NOT_REACHABLE_BELOW_VDD', `At ${device.corner}, ${say(device.temperature, '°C')}, W = ${say(w, 'm')} would need ${voltageNames(device.polarity).vgs} = ${say(vgs, 'V')} (above VDD = ${say(device.vdd, 'V')}) to carry ${say(id, 'A')}`, 'id');
     }

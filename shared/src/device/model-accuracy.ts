@@ -8,7 +8,7 @@ import { hasShortChannelTerms } from './short-channel.js';
  * docs/extraction.md): the square law and the long-channel all-region model against a realistic short-channel
  * device, the all-region model with fitted short-channel terms against the card it was fitted to.
  */
-export function modelAccuracyOf(model: CurrentModel, params: Pick<DeviceParams, 'dl' | 'dw' | 'theta0' | 'theta1' | 'theta2' | 'dibl' | 'pclm' | 'muExpL' | 'vtl' | 'nl'>): ModelAccuracy {
+export function modelAccuracyOf(model: CurrentModel, params: Pick<DeviceParams, 'dl' | 'dw' | 'theta0' | 'theta1' | 'theta2' | 'thetaB' | 'dibl' | 'pclm' | 'muExpL' | 'vtl' | 'nl'>): ModelAccuracy {
   if (model === 'square-law') {
     return {
       basis: 'long-channel',
@@ -18,7 +18,7 @@ export function modelAccuracyOf(model: CurrentModel, params: Pick<DeviceParams, 
   if (hasShortChannelTerms(params)) {
     return {
       basis: 'fitted',
-      summary: 'EKV with short-channel terms fitted to a model card: W at gm/ID 5 … 20 S/A within −9 … +11 % of the BSIM4 card it was fitted to (L = lmin … 10·lmin); VT from a first-order law',
+      summary: 'EKV with short-channel terms fitted to a model card: W at gm/ID 5 … 20 S/A within −8 … +8 % of the BSIM4 card it was fitted to (L = lmin … 10·lmin); VT from a first-order law',
     };
   }
   return {

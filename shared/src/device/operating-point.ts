@@ -1,5 +1,5 @@
 import { DEFAULT_JUNCTION, gateCapacitances, junctionCapacitance, transitFrequency } from './capacitance.js';
-import { channelOf, slopeFactorOf, thresholdOf } from './channel.js';
+import { betaOf, channelOf, slopeFactorOf, thresholdOf } from './channel.js';
 import type { CurrentModel } from './drain-current.js';
 import { type Leakage, leakage } from './leakage.js';
 import { pairMismatch } from './mismatch.js';
@@ -64,7 +64,8 @@ export function operatingPoint(device: PreparedDevice, model: CurrentModel, w: n
   const { params, ut } = device;
   const { vgs, vds, vsb } = bias;
   const channel = channelOf(device, model, w, l, fingers);
-  const { weff, leff, beta, lambda, terms } = channel;
+  const { weff, leff, lambda, terms } = channel;
+  const beta = betaOf(channel, vsb);
   const vt = thresholdOf(device, channel, vsb, vds);
   const vov = vgs - vt;
   const n = slopeFactorOf(device, channel, vsb);

@@ -15,6 +15,8 @@ export interface ChannelTerms {
   readonly esat: number;
   /** Pclm/Leff: strength of the channel-length modulation term; 0 without pclm. */
   readonly clm: number;
+  /** θB, 1/V: β ÷ (1 + θB·VSB) (mobility degradation by the depletion charge of a body bias). */
+  readonly thetaB: number;
   /** DIBL coefficient η at this length, V/V: VT falls by η·VDS. */
   readonly eta: number;
   /** VT shift of this length from the long-channel VT (roll-off < 0, reverse short-channel effect > 0), V. */
@@ -23,7 +25,7 @@ export interface ChannelTerms {
   readonly nShift: number;
 }
 
-export const LONG_CHANNEL: ChannelTerms = Object.freeze({ theta: 0, theta2: 0, esat: Infinity, clm: 0, eta: 0, vtShift: 0, nShift: 0 });
+export const LONG_CHANNEL: ChannelTerms = Object.freeze({ theta: 0, theta2: 0, thetaB: 0, esat: Infinity, clm: 0, eta: 0, vtShift: 0, nShift: 0 });
 
 /** DIBL falls as ((lmin − ΔL)/Leff)^diblExp away from lmin; the exponent when the profile gives none (common practice, no source). */
 export const DEFAULT_DIBL_EXPONENT = 2;
@@ -32,7 +34,7 @@ export const DEFAULT_VTL_EXPONENT = 2;
 /** The slope factor's rise at short L falls as ((lmin − ΔL)/Leff)² (common practice, no source). */
 export const N_RISE_EXPONENT = 2;
 
-type ShortChannelParams = Pick<DeviceParams, 'lmin' | 'dl' | 'theta0' | 'theta1' | 'theta2' | 'dibl' | 'diblExp' | 'pclm' | 'vtl' | 'vtlExp' | 'nl'>;
+type ShortChannelParams = Pick<DeviceParams, 'lmin' | 'dl' | 'theta0' | 'theta1' | 'theta2' | 'thetaB' | 'dibl' | 'diblExp' | 'pclm' | 'vtl' | 'vtlExp' | 'nl'>;
 
 /** Leff = L − ΔL, m (ΔL = 0 when the profile gives none). A length with no channel left is refused. */
 export function effectiveLength(params: Pick<DeviceParams, 'dl'>, l: number, field = 'l'): number {
@@ -55,10 +57,11 @@ export function channelTermsAt(params: ShortChannelParams, leff: number): Channe
   const eta = params.dibl === undefined ? 0 : params.dibl * shortest ** (params.diblExp ?? DEFAULT_DIBL_EXPONENT);
   const vtShift = params.vtl === undefined ? 0 : params.vtl * shortest ** (params.vtlExp ?? DEFAULT_VTL_EXPONENT);
   const nShift = params.nl === undefined ? 0 : params.nl * shortest ** N_RISE_EXPONENT;
-  if (theta1 === 0 && params.theta0 === undefined && params.theta2 === undefined && params.pclm === undefined && eta === 0 && vtShift === 0 && nShift === 0) return LONG_CHANNEL;
+  if (theta1 === 0 && params.theta0 === undefined && params.theta2 === undefined && params.thetaB === undefined && params.pclm === undefined && eta === 0 && vtShift === 0 && nShift === 0) return LONG_CHANNEL;
   return {
     theta: (params.theta0 ?? 0) + theta1 / leff,
     theta2: params.theta2 ?? 0,
+    thetaB: params.thetaB ?? 0,
     esat: theta1 > 0 ? leff / theta1 : Infinity,
     clm: (params.pclm ?? 0) / leff,
     eta,
@@ -73,6 +76,6 @@ export function mobilityExponentAt(params: Pick<DeviceParams, 'muExp' | 'muExpL'
 }
 
 /** True when the profile gives any short-channel term of the all-region model. */
-export function hasShortChannelTerms(params: Partial<Pick<DeviceParams, 'dl' | 'dw' | 'theta0' | 'theta1' | 'theta2' | 'dibl' | 'pclm' | 'muExpL' | 'vtl' | 'nl'>>): boolean {
-  return [params.dl, params.dw, params.theta0, params.theta1, params.theta2, params.dibl, params.pclm, params.muExpL, params.vtl, params.nl].some((value) => value !== undefined);
+export function hasShortChannelTerms(params: Partial<Pick<DeviceParams, 'dl' | 'dw' | 'theta0' | 'theta1' | 'theta2' | 'thetaB' | 'dibl' | 'pclm' | 'muExpL' | 'vtl' | 'nl'>>): boolean {
+  return [params.dl, params.dw, params.theta0, params.theta1, params.theta2, params.thetaB, params.dibl, params.pclm, params.muExpL, params.vtl, params.nl].some((value) => value !== undefined);
 }

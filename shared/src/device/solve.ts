@@ -1,4 +1,4 @@
-import { channelOf, slopeFactorOf, thresholdOf } from './channel.js';
+import { betaOf, channelOf, slopeFactorOf, thresholdOf } from './channel.js';
 import { type CurrentModel, drainCurrent } from './drain-current.js';
 import { EngineError } from './errors.js';
 import { type OperatingPoint, operatingPoint } from './operating-point.js';
@@ -104,14 +104,14 @@ export function solveSize(device: PreparedDevice, model: CurrentModel, target: S
     drawn = { snapped: snapWidth(w, params.wgrid, params.wmin, maxFingerWidth), wRequired: w };
   } else {
     const vov = overdriveOfConstraint(model, constraint, target[constraint] as number, vt, n, ut, vds, terms);
-    const weff = id / drainCurrent(model, perWidth.beta, n, ut, lambda, vov, vds, terms);
+    const weff = id / drainCurrent(model, betaOf(perWidth, vsb), n, ut, lambda, vov, vds, terms);
     if (!(weff <= MAX_WIDTH)) {
       throw new EngineError('W_TOO_LARGE', `This target needs W = ${say(weff, 'm')}, more than ${say(MAX_WIDTH, 'm')}; raise the overdrive or lower gm/ID`, constraint);
     }
     drawn = drawnWidthFor(weff, dw, params, maxFingerWidth);
   }
   const { snapped, wRequired } = drawn;
-  const beta = channelOf(device, model, snapped.w, l, snapped.fingers).beta;
+  const beta = betaOf(channelOf(device, model, snapped.w, l, snapped.fingers), vsb);
 
   let vgs: number;
   if (constraint === 'vgs') {

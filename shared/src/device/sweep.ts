@@ -175,6 +175,8 @@ function sweepSeries(
     Object.assign(inputs, { kp, leff, lambda, theta, theta2, esat, clm, eta, vtShift, n });
   }
   inputs.vt = shiftThreshold(inputs, count);
+  // θB: β ÷ (1 + θB·VSB) (betaOf in channel.ts), folded into kp so that every β below carries it.
+  if (terms.thetaB !== 0) inputs.kp = bodyBiasedKp(inputs.kp, inputs.vsb, terms.thetaB, count);
 
   // 2. Width and gate: hold "w" keeps the request's sized width; hold "id" sizes per metre of width and scales below.
   const gateSwept = param === 'vov' || param === 'vgs' || param === 'gmId';
@@ -214,6 +216,15 @@ function shiftThreshold(inputs: SeriesInputs, count: number): Float64Array {
   const shifted = new Float64Array(count);
   for (let i = 0; i < count; i++) shifted[i] = vt[i & mt] + vtShift[i & ms] - eta[i & me] * vds[i & md];
   return shifted;
+}
+
+/** kp ÷ (1 + θB·VSB) per point (one value when neither column varies). */
+function bodyBiasedKp(kp: Float64Array, vsb: Float64Array, thetaB: number, count: number): Float64Array {
+  if (kp.length === 1 && vsb.length === 1) return one(kp[0] / (1 + thetaB * vsb[0]));
+  const [mk, mv] = [kp, vsb].map(maskOf);
+  const into = new Float64Array(count);
+  for (let i = 0; i < count; i++) into[i] = kp[i & mk] / (1 + thetaB * vsb[i & mv]);
+  return into;
 }
 
 /** β = kp·Weff/Leff per point (hold "w"), or kp/Leff alone (per metre of effective width, hold "id"; scaled once the current is known). */
@@ -262,7 +273,7 @@ function overdriveColumn(
   const { vt, n, ut, vds, beta, lambda, theta, theta2, esat, clm, eta } = inputs;
   const [mt, mn, mu, md, mb, ml] = [vt, n, ut, vds, beta, lambda].map(maskOf);
   const [mTheta, mTheta2, mEsat, mClm, mEta] = [theta, theta2, esat, clm, eta].map(maskOf);
-  const terms = { theta: 0, theta2: 0, esat: Infinity, clm: 0, eta: 0, vtShift: 0, nShift: 0 };
+  const terms = { theta: 0, theta2: 0, thetaB: 0, esat: Infinity, clm: 0, eta: 0, vtShift: 0, nShift: 0 };
   switch (mode) {
     case 'swept-vov':
       return values;

@@ -87,11 +87,21 @@ export interface ExtractionProgress {
 const DEFAULT_NOISE_FLOOR = 1e-12;
 const DEFAULT_MAX_ITERATIONS = 300;
 const DEFAULT_MIN_GM_ID = 3;
-/** The density fit reads points up to this fraction of a curve's highest gm/ID (18.5 S/A of 31 on a 180 nm-class device). */
-const DENSITY_CEILING_FRACTION = 0.6;
+/**
+ * The density fit reads points up to this fraction of a curve's highest gm/ID: 21.6 S/A of 31 on a 180 nm-class
+ * device, so that the top of the sizing range (20 S/A) is fitted, not extrapolated.
+ */
+const DENSITY_CEILING_FRACTION = 0.7;
+/**
+ * The all-region fit runs its two stages twice: the density stage reads n at each VSB through γ and 2φF, which the
+ * threshold stage fits, so the second pass fits the density with the body law the threshold stage found.
+ */
+const ALL_REGION_PASSES = 2;
+/** Least-squares stages of a fit by model, each of up to maxIterations: the budget its progress counts against. */
+export const FIT_STAGES: Record<CurrentModel, number> = { 'square-law': 1, 'all-region': 2 * ALL_REGION_PASSES };
 
 /** Parameters of the current's shape: what the current does at a given VGS − VT (fitted with a threshold per curve). */
-const SHAPE: ReadonlySet<FitParameter> = new Set(['kp', 'dl', 'theta0', 'theta1', 'theta2', 'nl', 'pclm', 'lambda', 'muExp', 'muExpL']);
+const SHAPE: ReadonlySet<FitParameter> = new Set(['kp', 'dl', 'dw', 'theta0', 'theta1', 'theta2', 'thetaB', 'nl', 'pclm', 'lambda', 'muExp', 'muExpL']);
 /** Read off the subthreshold swing of the longest device (the physical n of weak inversion), not fitted. */
 const FROM_SWING: ReadonlySet<FitParameter> = new Set(['n']);
 
@@ -139,6 +149,7 @@ function screen(input: ExtractionInput, vtEstimate: (point: MeasuredPoint) => nu
 function identifiable(input: ExtractionInput, curves: readonly MeasuredCurve[]): { fit: FitParameter[]; held: { name: FitParameter; reason: string }[] } {
   const distinct = (values: number[]) => new Set(values.map((v) => v.toPrecision(6))).size;
   const lengths = distinct(curves.map((c) => c.l));
+  const widths = distinct(curves.map((c) => c.w / c.fingers));
   const drains = distinct(curves.map((c) => c.vds));
   const bodies = distinct(curves.map((c) => c.vsb));
   const temperatures = distinct(curves.map((c) => c.temperature));
@@ -154,6 +165,8 @@ function identifiable(input: ExtractionInput, curves: readonly MeasuredCurve[]):
     ['theta0', allRegion, ''],
     ['theta1', allRegion && lengths >= 2, 'all curves share one length'],
     ['theta2', allRegion, ''],
+    ['dw', allRegion && widths >= 2, 'all curves share one width per finger'],
+    ['thetaB', allRegion && bodies >= 2, 'all curves share one VSB'],
     ['dibl', allRegion && drains >= 2, 'all curves share one VDS'],
     ['diblExp', allRegion && drains >= 2 && lengths >= 3, 'DIBL needs several VDS at three or more lengths'],
     ['vtl', allRegion && lengths >= 2, 'all curves share one length'],
@@ -201,8 +214,8 @@ export function extractParameters(input: ExtractionInput, onProgress?: (progress
   };
   const model = new ModelAtPoints(input.polarity, input.model, input.base, points);
   let done = 0;
-  // The all-region fit runs two stages of up to maxIterations each: progress counts against both together.
-  const budget = maxIterations * (input.model === 'square-law' ? 1 : 2);
+  // The all-region fit runs its stages (FIT_STAGES) of up to maxIterations each: progress counts against all together.
+  const budget = maxIterations * FIT_STAGES[input.model];
   const report = (iterations: number, error: number) => onProgress?.({ iterations: done + iterations, maxIterations: budget, error });
   const boundsOf = (name: FitParameter) => fitBounds(name, lmin);
   const stage = (names: readonly FitParameter[], residualsOf: (params: DeviceParams) => Float64Array) => {
@@ -229,16 +242,20 @@ export function extractParameters(input: ExtractionInput, onProgress?: (progress
     const gmId = measuredGmId(points);
     const ceiling = new Map<MeasuredCurve, number>(curves.map((curve) => [curve, Math.max(...curve.indices.map((i) => (Number.isFinite(gmId[i]) ? gmId[i] : 0)))]));
     const dense = curves.flatMap((curve) => curve.indices.filter((i) => Number.isFinite(gmId[i]) && gmId[i] <= DENSITY_CEILING_FRACTION * (ceiling.get(curve) as number)));
-    const shaped = stage(fit.filter((name) => SHAPE.has(name)), (params) => model.densityResiduals(params, dense, gmId));
+    const offsets = new Map<MeasuredCurve, number>();
+    converged = true;
+    for (let pass = 0; pass < ALL_REGION_PASSES; pass++) {
+      const shaped = stage(fit.filter((name) => SHAPE.has(name)), (params) => model.densityResiduals(params, dense, gmId));
+      // 2. The threshold law (VT0, body effect, DIBL, length, temperature) through the threshold each curve showed.
+      const atShape = withFitted(input.base.params, [...values.keys()], [...values.values()]);
+      model.shapeResiduals(atShape, curves, offsets);
+      const thresholds = curves.map((curve) => model.thresholdOf(atShape, curve) + (offsets.get(curve) ?? 0));
+      const lawed = stage(fit.filter((name) => !SHAPE.has(name) && !FROM_SWING.has(name)), (params) => Float64Array.from(curves, (curve, k) => model.thresholdOf(params, curve) - thresholds[k]));
+      // The last pass decides: an earlier one only has to bring the body law near.
+      converged = shaped && lawed;
+    }
     const densityResiduals = model.densityResiduals(withFitted(input.base.params, [...values.keys()], [...values.values()]), dense, gmId);
     densityRms = Math.sqrt(densityResiduals.reduce((sum, r) => sum + r * r, 0) / Math.max(densityResiduals.length, 1));
-    const offsets = new Map<MeasuredCurve, number>();
-    // 2. The threshold law (VT0, body effect, DIBL, length, temperature) through the threshold each curve showed.
-    const atShape = withFitted(input.base.params, [...values.keys()], [...values.values()]);
-    model.shapeResiduals(atShape, curves, offsets);
-    const thresholds = curves.map((curve) => model.thresholdOf(atShape, curve) + (offsets.get(curve) ?? 0));
-    const lawed = stage(fit.filter((name) => !SHAPE.has(name) && !FROM_SWING.has(name)), (params) => Float64Array.from(curves, (curve, k) => model.thresholdOf(params, curve) - thresholds[k]));
-    converged = shaped && lawed;
   }
 
   const names = [...values.keys()];

@@ -15,6 +15,7 @@ export {
   type FittedParameter,
   type ExcludedPoint,
   type RegionError,
+  FIT_STAGES,
   extractParameters,
   slopeFactorOfSwing,
 } from './extract-parameters.js';

@@ -1,5 +1,5 @@
 import type { DeviceParams, Polarity, Process } from '../schemas/process.js';
-import { channelOf, slopeFactorOf, thresholdOf } from '../device/channel.js';
+import { betaOf, channelOf, slopeFactorOf, thresholdOf } from '../device/channel.js';
 import { type CurrentModel, GM_ID, ID, KERNEL_OUTPUTS, drainCurrent, drainCurrentInto } from '../device/drain-current.js';
 import { overdriveForGmId } from '../device/overdrive.js';
 import { type PreparedDevice, prepareDevice } from '../device/resolve-device.js';
@@ -45,7 +45,7 @@ export class ModelAtPoints {
       const device = deviceAt(point.temperature);
       const channel = channelOf(device, this.model, point.w, point.l, point.fingers ?? 1);
       const vov = point.vgs - shift - thresholdOf(device, channel, point.vsb, point.vds);
-      drainCurrentInto(this.model, channel.beta, slopeFactorOf(device, channel, point.vsb), device.ut, channel.lambda, vov, point.vds, this.out, channel.terms);
+      drainCurrentInto(this.model, betaOf(channel, point.vsb), slopeFactorOf(device, channel, point.vsb), device.ut, channel.lambda, vov, point.vds, this.out, channel.terms);
       return this.out[ID] > 0 && Number.isFinite(this.out[ID]);
     } catch {
       return false;
@@ -122,7 +122,7 @@ export class ModelAtPoints {
         const channel = channelOf(device, this.model, p.w, p.l, p.fingers ?? 1);
         const n = slopeFactorOf(device, channel, p.vsb);
         const vov = overdriveForGmId(this.model, n, device.ut, p.vds, gmId[index], channel.terms);
-        const id = drainCurrent(this.model, channel.beta, n, device.ut, channel.lambda, vov, p.vds, channel.terms);
+        const id = drainCurrent(this.model, betaOf(channel, p.vsb), n, device.ut, channel.lambda, vov, p.vds, channel.terms);
         r[k] = id > 0 && Number.isFinite(id) ? Math.log(id) - Math.log(p.id) : REFUSAL_PENALTY;
       } catch {
         r[k] = REFUSAL_PENALTY;

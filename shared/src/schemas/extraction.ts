@@ -16,7 +16,7 @@ export const extractionModelSchema = z
 export type ExtractionModel = z.infer<typeof extractionModelSchema>;
 
 /** The parameters an extraction can fit (the engine's FIT_PARAMETERS are this list). */
-export const EXTRACTION_PARAMETERS = ['vt0', 'kp', 'n', 'gamma', 'twoPhiF', 'lambda', 'dl', 'theta0', 'theta1', 'theta2', 'dibl', 'diblExp', 'vtl', 'vtlExp', 'nl', 'pclm', 'vtTc', 'muExp', 'muExpL'] as const;
+export const EXTRACTION_PARAMETERS = ['vt0', 'kp', 'n', 'gamma', 'twoPhiF', 'lambda', 'dl', 'dw', 'theta0', 'theta1', 'theta2', 'thetaB', 'dibl', 'diblExp', 'vtl', 'vtlExp', 'nl', 'pclm', 'vtTc', 'muExp', 'muExpL'] as const;
 export type ExtractionParameter = (typeof EXTRACTION_PARAMETERS)[number];
 
 /** Largest curve file POST /api/extractions accepts; a bigger one answers 413 PAYLOAD_TOO_LARGE. */
