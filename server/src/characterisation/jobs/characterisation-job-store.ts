@@ -70,24 +70,11 @@ export class CharacterisationJobStore {
 
   /** Claims the oldest queued job for `owner` (the update is conditional on it still being queued); its id, or null when none waits. */
   async claimNext(owner: string): Promise<string | null> {
-    const next = await this.jobs.findOne({ select: { id: true }, where: { status: 'queued' }, order: { createdAt: 'ASC' } });
+    const next = await this.jobs.findOne({ select: { id: true, attempts: true, startedAt: true }, where: { status: 'queued' }, order: { createdAt: 'ASC' } });
     if (!next) return null;
-    return (await this.claim(next.id, owner)) ? next.id : null;
-  }
-
-  /** Claims one queued job for `owner`: running, one more attempt. False when it is not queued (any more). */
-  async claim(id: string, owner: string): Promise<boolean> {
-    const job = await this.jobs.findOne({ select: { id: true, attempts: true, startedAt: true }, where: { id, status: 'queued' } });
-    if (!job) return false;
     const now = new Date();
-    const claimed = await this.jobs.update({ id, status: 'queued' }, { status: 'running', owner, heartbeatAt: now, attempts: job.attempts + 1, startedAt: job.startedAt ?? now });
-    return claimed.affected === 1;
-  }
-
-  /** The ids of the queued jobs, oldest first. */
-  async queuedIds(): Promise<string[]> {
-    const queued = await this.jobs.find({ select: { id: true }, where: { status: 'queued' }, order: { createdAt: 'ASC' } });
-    return queued.map((job) => job.id);
+    const claimed = await this.jobs.update({ id: next.id, status: 'queued' }, { status: 'running', owner, heartbeatAt: now, attempts: next.attempts + 1, startedAt: next.startedAt ?? now });
+    return claimed.affected === 1 ? next.id : null;
   }
 
   /**
@@ -113,6 +100,22 @@ export class CharacterisationJobStore {
       }
     }
     return { resumed, failed };
+  }
+
+  /** Claims one queued job for `owner` (a queue handed out its id): running, one more attempt. False when it is not queued (any more). */
+  async claim(id: string, owner: string): Promise<boolean> {
+    const job = await this.jobs.findOne({ select: { id: true, attempts: true, startedAt: true }, where: { id, status: 'queued' } });
+    if (!job) return false;
+    const now = new Date();
+    // Conditional on the job still being queued: of two servers claiming it at once, one updates it.
+    const claimed = await this.jobs.update({ id, status: 'queued' }, { status: 'running', owner, heartbeatAt: now, attempts: job.attempts + 1, startedAt: job.startedAt ?? now });
+    return claimed.affected === 1;
+  }
+
+  /** The ids of the queued jobs, oldest first. */
+  async queuedIds(): Promise<string[]> {
+    const queued = await this.jobs.find({ select: { id: true }, where: { status: 'queued' }, order: { createdAt: 'ASC' } });
+    return queued.map((job) => job.id);
   }
 
   /** A running job's report: progress, estimate and a heartbeat, if it is still this owner's. */
