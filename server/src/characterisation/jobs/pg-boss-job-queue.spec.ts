@@ -145,10 +145,10 @@ describeWithPostgres('PgBossJobQueue: two server processes sharing one PostgreSQ
   });
 
   /** A server process: its own pg-boss on the shared database, taking jobs unless `worker` is false. */
-  function serverProcess(options: { worker: boolean }): PgBossJobQueue {
+  function serverProcess(options: { worker: boolean; databaseUrl?: string }): PgBossJobQueue {
     const config = loadConfig({
       NODE_ENV: 'test',
-      DATABASE_URL: database.url,
+      DATABASE_URL: options.databaseUrl ?? database.url,
       JOB_WORKER: String(options.worker),
       CHARACTERISATION_LEASE_SECONDS: String(LEASE_SECONDS),
       CHARACTERISATION_CONCURRENCY: String(CONCURRENCY),
@@ -233,6 +233,19 @@ describeWithPostgres('PgBossJobQueue: two server processes sharing one PostgreSQ
 
     await until('the job is done', async () => (await statusOf(id)) === 'done');
     expect(log.startsOf(id)).toEqual(['worker']);
+  });
+
+  it('keeps a job queued, and starts and stops without throwing, when pg-boss cannot reach its database', async () => {
+    const unreachable = new URL(database.url);
+    unreachable.pathname = '/cw_no_such_database';
+    const log = new RunLog();
+    const lost = serverProcess({ worker: true, databaseUrl: unreachable.toString() });
+    lost.start(reportingRun(store, 'lost', log, new Set()));
+    const id = await queuedJob();
+    await expect(lost.enqueue(id)).resolves.toBeUndefined();
+    await expect(lost.stop()).resolves.toBeUndefined();
+    expect(await statusOf(id)).toBe('queued');
+    expect(log.starts).toHaveLength(0);
   });
 
   it('cancels a job through the process running it, and through its row from a process that does not run it', async () => {
