@@ -14,7 +14,8 @@ import { CharacterisationJobEntity } from './jobs/characterisation-job.entity.js
 import { CharacterisationJobStore } from './jobs/characterisation-job-store.js';
 import { CharacterisationRunner } from './jobs/characterisation-runner.js';
 import { EmbeddedJobQueue } from './jobs/embedded-job-queue.js';
-import { JOB_QUEUE } from './jobs/job-queue.js';
+import { JOB_QUEUE, type JobQueue } from './jobs/job-queue.js';
+import { PgBossJobQueue } from './jobs/pg-boss-job-queue.js';
 import { ProcessCharacterisationsController } from './process-characterisations.controller.js';
 import { SimulationWorkers } from './simulation-workers.js';
 import { SimulatorEngineChoice } from './simulator-engine-choice.js';
@@ -25,9 +26,9 @@ import { CharacterisationTables } from './tables/characterisation-tables.service
 /**
  * Characterising a process version's model card with ngspice into lookup tables (docs/characterisation.md): the jobs
  * (stored, queued, run on the simulation workers, resumed after a stop), their tables, the design charts. Exports
- * CharacterisationTables for the table model (compute, sheets) and SimulationWorkers. A job queue other than the
- * embedded one (pg-boss on PostgreSQL, issue 12) is registered under JOB_QUEUE; features that use tables hear of new
- * ones through TABLES_LISTENERS. Gives the library the demo cards (DEMO_MODEL_CARDS) and queues the demo's jobs.
+ * CharacterisationTables for the table model (compute, sheets) and SimulationWorkers. The job queue under JOB_QUEUE
+ * is the embedded one on SQLite and pg-boss's on PostgreSQL (DATABASE_URL: several server processes share the jobs);
+ * features that use tables hear of new ones through TABLES_LISTENERS. Gives the library the demo cards (DEMO_MODEL_CARDS) and queues the demo's jobs.
  */
 @Module({
   imports: [TypeOrmModule.forFeature([CharacterisationJobEntity, CharacterisationTableEntity, CharacterisationTableChunkEntity]), ProcessesModule, UsersModule],
@@ -39,8 +40,12 @@ import { CharacterisationTables } from './tables/characterisation-tables.service
     CharacterisationTables,
     CharacterisationRunner,
     CharacterisationService,
-    EmbeddedJobQueue,
-    { provide: JOB_QUEUE, useExisting: EmbeddedJobQueue },
+    {
+      provide: JOB_QUEUE,
+      inject: [CharacterisationJobStore, AppConfigService],
+      useFactory: (store: CharacterisationJobStore, config: AppConfigService): JobQueue =>
+        config.usesPostgres ? new PgBossJobQueue(store, config) : new EmbeddedJobQueue(store, config),
+    },
     CharacterisationLifecycle,
     { provide: DEMO_MODEL_CARDS, useClass: DemoModelCardFiles },
     { provide: DEMO_SEEDERS, useClass: DemoCharacterisationSeeder },

@@ -20,6 +20,9 @@ export class AppConfigService {
   get dataDir(): string {
     return this.config.dataDir;
   }
+  get databaseUrl(): string | undefined {
+    return this.config.databaseUrl;
+  }
   get jwtSecret(): string | undefined {
     return this.config.jwtSecret;
   }
@@ -46,6 +49,13 @@ export class AppConfigService {
   }
   get trustProxyHops(): number {
     return this.config.trustProxyHops;
+  }
+  /** The database is PostgreSQL (DATABASE_URL), which several server processes can share; else SQLite in DATA_DIR. */
+  get usesPostgres(): boolean {
+    return this.config.databaseUrl !== undefined;
+  }
+  get jobWorker(): boolean {
+    return this.config.jobWorker;
   }
   get characterisation(): CharacterisationConfig {
     return this.config.characterisation;

@@ -22,6 +22,7 @@ export function loadConfig(source: EnvSource = process.env): AppConfig {
     nodeEnv: env.NODE_ENV,
     port: env.PORT,
     dataDir: fromRepoRoot(env.DATA_DIR),
+    databaseUrl: env.DATABASE_URL,
     jwtSecret: env.JWT_SECRET,
     jwtTtlSeconds: env.JWT_TTL,
     smtpUrl: env.SMTP_URL,
@@ -32,6 +33,7 @@ export function loadConfig(source: EnvSource = process.env): AppConfig {
     clientDist: fromRepoRoot(env.CLIENT_DIST),
     corsOrigins: (env.CORS_ORIGINS ?? '').split(',').map((o) => o.trim()).filter(Boolean),
     trustProxyHops: env.TRUST_PROXY,
+    jobWorker: env.JOB_WORKER,
     characterisation: {
       concurrency: env.CHARACTERISATION_CONCURRENCY,
       engine: env.CHARACTERISATION_ENGINE,

@@ -102,6 +102,22 @@ export class CharacterisationJobStore {
     return { resumed, failed };
   }
 
+  /** Claims one queued job for `owner` (a queue handed out its id): running, one more attempt. False when it is not queued (any more). */
+  async claim(id: string, owner: string): Promise<boolean> {
+    const job = await this.jobs.findOne({ select: { id: true, attempts: true, startedAt: true }, where: { id, status: 'queued' } });
+    if (!job) return false;
+    const now = new Date();
+    // Conditional on the job still being queued: of two servers claiming it at once, one updates it.
+    const claimed = await this.jobs.update({ id, status: 'queued' }, { status: 'running', owner, heartbeatAt: now, attempts: job.attempts + 1, startedAt: job.startedAt ?? now });
+    return claimed.affected === 1;
+  }
+
+  /** The ids of the queued jobs, oldest first. */
+  async queuedIds(): Promise<string[]> {
+    const queued = await this.jobs.find({ select: { id: true }, where: { status: 'queued' }, order: { createdAt: 'ASC' } });
+    return queued.map((job) => job.id);
+  }
+
   /** A running job's report: progress, estimate and a heartbeat, if it is still this owner's. */
   async report(id: string, owner: string, progress: { done: number; etaSeconds: number | null }): Promise<Report> {
     const job = await this.jobs.findOne({ select: { id: true, status: true, owner: true, cancelRequested: true }, where: { id } });

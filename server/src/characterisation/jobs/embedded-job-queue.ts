@@ -8,7 +8,7 @@ import type { JobHandler, JobQueue, StopReason } from './job-queue.js';
  * The queue of a single server: the jobs table is the queue. A poll (and every enqueue) first takes over the running
  * jobs whose server went silent for the lease (resumed, or failed after too many runs), then claims queued jobs up to
  * CHARACTERISATION_CONCURRENCY. A second server on the same data directory shares the work safely: claims and reports
- * are conditional on the owner.
+ * are conditional on the owner. With JOB_WORKER=false this server takes no jobs: another one on the data directory runs them.
  */
 @Injectable()
 export class EmbeddedJobQueue implements JobQueue {
@@ -27,6 +27,7 @@ export class EmbeddedJobQueue implements JobQueue {
   ) {}
 
   start(handler: JobHandler): void {
+    if (!this.config.jobWorker) return;
     this.handler = handler;
     const { leaseSeconds } = this.config.characterisation;
     this.timer = setInterval(() => void this.poll(), Math.min(2000, (leaseSeconds * 1000) / 2));

@@ -3,6 +3,7 @@ import type { ExtractionOptions } from '@channelwright/shared/schemas';
 import { Injectable, Logger, type OnApplicationBootstrap, type OnModuleDestroy } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import type { Repository } from 'typeorm';
+import { AppConfigService } from '../../config/app-config.service.js';
 import { ProcessesService } from '../../processes/processes.service.js';
 import { ExtractionEntity } from '../extraction.entity.js';
 import { ExtractionJobStore } from './extraction-job-store.js';
@@ -12,15 +13,18 @@ import { ExtractionWorkers, type FitProgress, type FitSettings } from './extract
 export const MAX_ATTEMPTS = 3;
 /** Progress is written to the job's row at most this often, ms. */
 const REPORT_INTERVAL_MS = 250;
+/** How often a worker looks for jobs that another server (one with JOB_WORKER=false) stored, ms. */
+const POLL_INTERVAL_MS = 2000;
 
 type StopReason = 'cancel' | 'shutdown';
 
 /**
  * Runs the queued extractions of this server on its extraction workers, as many at once as there are worker threads.
- * The jobs table is the queue: a new job, a finished one and the start of the server look for the next. At start,
- * jobs an earlier run of the server left running are queued again (a fit is a pure function of its stored file and
- * options, so running it again is resuming it) or, after MAX_ATTEMPTS, failed. One server per database: a second one
- * would need the leases of the characterisation jobs (docs/extraction.md, "Jobs").
+ * The jobs table is the queue: a new job, a finished one, the start of the server and a poll every two seconds (for
+ * jobs another server stored) look for the next. At start, jobs an earlier run of the server left running are queued
+ * again (a fit is a pure function of its stored file and options, so running it again is resuming it) or, after
+ * MAX_ATTEMPTS, failed. A server with JOB_WORKER=false runs no fits and leaves them to the worker. One worker per
+ * database: a second one would need the leases of the characterisation jobs (docs/extraction.md, "Jobs").
  */
 @Injectable()
 export class ExtractionRunner implements OnApplicationBootstrap, OnModuleDestroy {
@@ -29,32 +33,38 @@ export class ExtractionRunner implements OnApplicationBootstrap, OnModuleDestroy
   private polling: Promise<void> | null = null;
   private again = false;
   private stopped = false;
+  private timer: NodeJS.Timeout | null = null;
 
   constructor(
     @InjectRepository(ExtractionEntity) private readonly rows: Repository<ExtractionEntity>,
     private readonly store: ExtractionJobStore,
     private readonly workers: ExtractionWorkers,
     private readonly processes: ProcessesService,
+    private readonly config: AppConfigService,
   ) {}
 
   async onApplicationBootstrap(): Promise<void> {
+    if (!this.config.jobWorker) return;
     const recovered = await this.store.recoverInterrupted(MAX_ATTEMPTS);
     for (const id of recovered.resumed) this.logger.log(`Extraction ${id}: the server stopped while it ran; running it again`);
     for (const id of recovered.failed) this.logger.warn(`Extraction ${id}: the server stopped too often while it ran; failed`);
     void this.poll();
+    this.timer = setInterval(() => void this.poll(), POLL_INTERVAL_MS);
+    this.timer.unref();
   }
 
   /** Stops taking jobs and stops the running ones without ending them: the next start runs them again. */
   async onModuleDestroy(): Promise<void> {
     this.stopped = true;
+    if (this.timer) clearInterval(this.timer);
     await this.polling;
     for (const run of this.running.values()) run.controller.abort('shutdown' satisfies StopReason);
     await Promise.all([...this.running.values()].map((run) => run.done));
   }
 
-  /** A job was stored queued: have a worker take it. */
+  /** A job was stored queued: have a worker take it (here, or within a poll in the worker server). */
   enqueue(): Promise<void> {
-    return this.poll();
+    return this.config.jobWorker ? this.poll() : Promise.resolve();
   }
 
   /** Stops a job running here; the run ends its row cancelled. False when it does not run here. */
