@@ -42,7 +42,7 @@ interface Case {
   send(call: Call): PromiseLike<Response>;
 }
 
-/** The callers who belong to neither P nor the library's maintainers. */
+/** The callers who may not read P: signed out, disabled (though a designer of P), or in another project only. */
 const OUTSIDE_P = new Set<Actor>(['anonymous', 'disabled', 'outsider']);
 
 /** A made row's id, not a version number kept beside them. */
@@ -57,7 +57,7 @@ const device = { polarity: 'nmos', id: 10e-6, l: 0.5e-6, vds: 0.6 };
 const versionOf = async (world: MatrixWorld, path: string, pick: (body: Record<string, unknown>) => unknown = (body) => body.version, who: 'owner' | 'admin' = 'owner') =>
   String(pick((await world.send(who, 'get', path).expect(200)).body));
 
-//                                                       anon dis out view des rev own admin
+//                                                      ano dis out vie des rev own adm
 const TABLE: Record<RouteKey, Case> = {
   // The API description and Nest's answer to a path no route takes: public.
   'GET /api/docs-json': { cells: '                      ok  ok  ok  ok  ok  ok  ok  ok', ok: 200, send: (c) => c.get('/api/docs-json') },
