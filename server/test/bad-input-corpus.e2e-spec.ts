@@ -1,6 +1,6 @@
-import { createHash } from 'node:crypto';
 import { apiErrorBodySchema } from '@channelwright/shared/schemas';
 import { DEMO_ACCOUNTS } from '../src/seed/demo-accounts.js';
+import { storedRowsDigest } from './helpers/stored-rows-digest.js';
 import { bearer, createTestApp, type TestApp } from './helpers/test-app.js';
 
 // A corpus of malformed requests against every route that takes a JSON body (found in the server's own
@@ -62,20 +62,7 @@ describe('a corpus of malformed requests', () => {
   });
   afterAll(() => t.close());
 
-  /**
-   * A digest of every row of every table: equal digests, nothing written. Mail is delivered in the background
-   * after the request that queued it: the outbox counts by its rows (a refused request queues none), not by
-   * their delivery state, and the local mail sink's received copies are left out.
-   */
-  async function digest(): Promise<string> {
-    const tables: Array<{ name: string }> = await t.dataSource.query(`SELECT "name" FROM sqlite_master WHERE "type" = 'table' AND "name" NOT LIKE 'sqlite_%' AND "name" <> 'received_mail' ORDER BY "name"`);
-    const hash = createHash('sha256');
-    for (const { name } of tables) {
-      const columns = name === 'outbox_messages' ? '"id"' : '*';
-      hash.update(name).update(JSON.stringify(await t.dataSource.query(`SELECT ${columns} FROM "${name}" ORDER BY rowid`)));
-    }
-    return hash.digest('hex');
-  }
+  const digest = () => storedRowsDigest(t.dataSource);
 
   /** The path with its parameters filled by real rows, so the request gets past "not found" to the body checks. */
   function concrete(path: string): string {
