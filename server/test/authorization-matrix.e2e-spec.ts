@@ -156,6 +156,12 @@ const TABLE: Record<RouteKey, Case> = {
 
   // Extractions: anyone who reads the base profile uploads; each reads their own, maintainers all; maintainers save.
   'POST /api/extractions': { cells: '                   401 401 404 ok  ok  ok  ok  ok', ok: 202, send: (c) => uploadCurves(c.post('/api/extractions'), c.ids.extractionProfile) },
+  // A fit from P's characterised table: whoever reads the profile may fit (only maintainers save, below).
+  'POST /api/extractions/from-table': {
+    cells: '         401 401 404 ok  ok  ok  ok  ok',
+    ok: 202,
+    send: (c) => c.post('/api/extractions/from-table').send({ processId: c.ids.profile, polarity: 'nmos', corner: 'TT', lengths: [0.5e-6] }),
+  },
   'GET /api/extractions': { cells: '                    401 401 ok  ok  ok  ok  ok  ok', ok: 200, send: (c) => c.get('/api/extractions') },
   'GET /api/extractions/:id': { cells: '                401 401 404 404 ok  404 404 ok', ok: 200, send: (c) => c.get(`/api/extractions/${c.ids.extraction}`) },
   'GET /api/extractions/:id/points': { cells: '         401 401 404 404 ok  404 404 ok', ok: 200, send: (c) => c.get(`/api/extractions/${c.ids.extraction}/points`) },
