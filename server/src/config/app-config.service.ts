@@ -20,6 +20,9 @@ export class AppConfigService {
   get dataDir(): string {
     return this.config.dataDir;
   }
+  get databaseUrl(): string | undefined {
+    return this.config.databaseUrl;
+  }
   get jwtSecret(): string | undefined {
     return this.config.jwtSecret;
   }

@@ -7,6 +7,8 @@ export interface AppConfig {
   port: number;
   /** Absolute folder for the SQLite database and every other file the server writes. */
   dataDir: string;
+  /** PostgreSQL to use instead of SQLite in DATA_DIR (DATABASE_URL); undefined: SQLite. */
+  databaseUrl?: string;
   /** JWT_SECRET when set; otherwise the server's own key, generated once and kept in DATA_DIR (auth/signing-key.ts). */
   jwtSecret?: string;
   jwtTtlSeconds: number;

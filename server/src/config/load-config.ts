@@ -22,6 +22,7 @@ export function loadConfig(source: EnvSource = process.env): AppConfig {
     nodeEnv: env.NODE_ENV,
     port: env.PORT,
     dataDir: fromRepoRoot(env.DATA_DIR),
+    databaseUrl: env.DATABASE_URL,
     jwtSecret: env.JWT_SECRET,
     jwtTtlSeconds: env.JWT_TTL,
     smtpUrl: env.SMTP_URL,
