@@ -2,6 +2,7 @@ import { createHash } from 'node:crypto';
 import { apiErrorBodySchema } from '@channelwright/shared/schemas';
 import { DEMO_ACCOUNTS } from '../src/seed/demo-accounts.js';
 import { bearer, createTestApp, type TestApp } from './helpers/test-app.js';
+import { TEST_DATABASE_ENGINE } from './helpers/test-database.js';
 
 // A corpus of malformed requests against every route that takes a JSON body (found in the server's own
 // OpenAPI document, so a new route joins the corpus by itself) and against the uploads. Every answer must be
@@ -68,11 +69,17 @@ describe('a corpus of malformed requests', () => {
    * their delivery state, and the local mail sink's received copies are left out.
    */
   async function digest(): Promise<string> {
-    const tables: Array<{ name: string }> = await t.dataSource.query(`SELECT "name" FROM sqlite_master WHERE "type" = 'table' AND "name" NOT LIKE 'sqlite_%' AND "name" <> 'received_mail' ORDER BY "name"`);
+    const postgres = TEST_DATABASE_ENGINE === 'postgres';
+    const tables: Array<{ name: string }> = await t.query(
+      postgres
+        ? `SELECT "table_name" AS "name" FROM "information_schema"."tables" WHERE "table_schema" = current_schema() AND "table_type" = 'BASE TABLE' AND "table_name" <> 'received_mail' ORDER BY "table_name"`
+        : `SELECT "name" FROM sqlite_master WHERE "type" = 'table' AND "name" NOT LIKE 'sqlite_%' AND "name" <> 'received_mail' ORDER BY "name"`,
+    );
     const hash = createHash('sha256');
     for (const { name } of tables) {
       const columns = name === 'outbox_messages' ? '"id"' : '*';
-      hash.update(name).update(JSON.stringify(await t.dataSource.query(`SELECT ${columns} FROM "${name}" ORDER BY rowid`)));
+      // Storage order, stable while nothing is written: SQLite's rowid, PostgreSQL's ctid.
+      hash.update(name).update(JSON.stringify(await t.query(`SELECT ${columns} FROM "${name}" ORDER BY ${postgres ? 'ctid' : 'rowid'}`)));
     }
     return hash.digest('hex');
   }

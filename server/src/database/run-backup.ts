@@ -1,5 +1,6 @@
 // `npm run backup [-- <file>]`: a consistent online copy of DATA_DIR's database, safe while the server runs.
-// Without a file name the copy goes to DATA_DIR/backups/channelwright-<UTC time>.sqlite.
+// Without a file name the copy goes to DATA_DIR/backups/channelwright-<UTC time>.sqlite. SQLite only: on PostgreSQL it
+// refuses and names pg_dump.
 import { join, resolve } from 'node:path';
 import { ConfigError } from '../config/config-error.js';
 import { loadConfig } from '../config/load-config.js';
@@ -7,6 +8,12 @@ import { backupDatabase } from './backup-database.js';
 
 try {
   const config = loadConfig();
+  if (config.databaseUrl !== undefined) {
+    // SQLite's online backup API has no PostgreSQL counterpart here: PostgreSQL's own pg_dump takes a consistent copy.
+    console.error('DATABASE_URL names a PostgreSQL database: npm run backup copies only the SQLite database in DATA_DIR.');
+    console.error('Back up PostgreSQL with pg_dump, e.g. pg_dump --format=custom --file=channelwright.dump "$DATABASE_URL" (docs/operations.md).');
+    process.exit(2);
+  }
   const stamp = new Date().toISOString().replace(/[:.]/g, '-');
   const target = process.argv[2] ? resolve(process.argv[2]) : join(config.dataDir, 'backups', `channelwright-${stamp}.sqlite`);
   const result = await backupDatabase(config.dataDir, target);
