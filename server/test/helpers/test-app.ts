@@ -24,7 +24,7 @@ export interface TestApp {
   /** The real database behind the app (SQLite, or PostgreSQL in postgres mode), for checks (and deliberate tampering) in tests. */
   dataSource: DataSource;
   /** Raw SQL on that database with SQLite's `?` placeholders (numbered for PostgreSQL). */
-  query(sql: string, params?: unknown[]): Promise<any>;
+  query(sql: string, params?: unknown[]): ReturnType<DataSource['query']>;
   /** Drops a trigger (to tamper with what it guards). */
   dropTrigger(name: string, table: string): Promise<void>;
   dataDir: string;
