@@ -4,14 +4,13 @@
 import { join, resolve } from 'node:path';
 import { ConfigError } from '../config/config-error.js';
 import { loadConfig } from '../config/load-config.js';
-import { backupDatabase } from './backup-database.js';
+import { backupDatabase, backupRefusal } from './backup-database.js';
 
 try {
   const config = loadConfig();
-  if (config.databaseUrl !== undefined) {
-    // SQLite's online backup API has no PostgreSQL counterpart here: PostgreSQL's own pg_dump takes a consistent copy.
-    console.error('DATABASE_URL names a PostgreSQL database: npm run backup copies only the SQLite database in DATA_DIR.');
-    console.error('Back up PostgreSQL with pg_dump, e.g. pg_dump --format=custom --file=channelwright.dump "$DATABASE_URL" (docs/operations.md).');
+  const refusal = backupRefusal(config);
+  if (refusal !== undefined) {
+    console.error(refusal);
     process.exit(2);
   }
   const stamp = new Date().toISOString().replace(/[:.]/g, '-');

@@ -24,7 +24,7 @@ export interface TestApp {
   /** The real database behind the app (SQLite, or PostgreSQL in postgres mode), for checks (and deliberate tampering) in tests. */
   dataSource: DataSource;
   /** Raw SQL on that database with SQLite's `?` placeholders (numbered for PostgreSQL). */
-  query(sql: string, params?: unknown[]): ReturnType<DataSource['query']>;
+  query: DataSource['query'];
   /** Drops a trigger (to tamper with what it guards). */
   dropTrigger(name: string, table: string): Promise<void>;
   dataDir: string;
@@ -55,7 +55,7 @@ export async function createTestApp(options: TestAppOptions = {}): Promise<TestA
     app,
     dataSource: app.get(DataSource),
     dataDir: testEnv.dataDir,
-    query: (sql, params) => app.get(DataSource).query(portableSql(sql), params),
+    query: (sql: string, params?: unknown[]) => app.get(DataSource).query(portableSql(sql), params),
     async dropTrigger(name, table) {
       await app.get(DataSource).query(TEST_DATABASE_ENGINE === 'postgres' ? `DROP TRIGGER IF EXISTS "${name}" ON "${table}"` : `DROP TRIGGER IF EXISTS "${name}"`);
     },
