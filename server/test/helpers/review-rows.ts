@@ -4,6 +4,6 @@ import type { TestApp } from './test-app.js';
 export async function snapshotRows(t: TestApp): Promise<Record<string, unknown[]>> {
   const tables = ['revisions', 'revision_devices', 'review_requests', 'revision_comments', 'audit_events', 'outbox_messages'];
   const rows: Record<string, unknown[]> = {};
-  for (const table of tables) rows[table] = await t.dataSource.query(`SELECT * FROM "${table}" ORDER BY rowid`);
+  for (const table of tables) rows[table] = await t.query(`SELECT * FROM "${table}" ORDER BY "id"`);
   return rows;
 }
