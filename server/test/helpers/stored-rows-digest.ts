@@ -4,8 +4,9 @@ import type { DataSource } from 'typeorm';
 /**
  * A digest of every row of every table: equal digests, nothing written. Mail is delivered in the background
  * after the request that queued it: the outbox counts by its rows (a refused request queues none), not by
- * their delivery state, and the local mail sink's received copies are left out. Rows in storage order, stable
- * while nothing is written: SQLite's rowid, PostgreSQL's ctid.
+ * their delivery state, and the local mail sink's received copies are left out. Each table's rows are hashed as a
+ * sorted list of their JSON texts: the content, whatever order the engine keeps them in (PostgreSQL moves a row it
+ * rewrote with the same values).
  */
 export async function storedRowsDigest(dataSource: DataSource): Promise<string> {
   const postgres = dataSource.options.type === 'postgres';
@@ -17,7 +18,8 @@ export async function storedRowsDigest(dataSource: DataSource): Promise<string> 
   const hash = createHash('sha256');
   for (const { name } of tables) {
     const columns = name === 'outbox_messages' ? '"id"' : '*';
-    hash.update(name).update(JSON.stringify(await dataSource.query(`SELECT ${columns} FROM "${name}" ORDER BY ${postgres ? 'ctid' : 'rowid'}`)));
+    const rows: unknown[] = await dataSource.query(`SELECT ${columns} FROM "${name}"`);
+    hash.update(name).update(JSON.stringify(rows.map((row) => JSON.stringify(row)).sort()));
   }
   return hash.digest('hex');
 }
