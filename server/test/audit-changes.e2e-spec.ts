@@ -104,10 +104,10 @@ describe('membership, sheet and device changes leave audit rows (and a new membe
     const sheet = await newSheet(t, tokens.designer, projectId, profileId, 'Frozen once');
     await t.http().post(`/api/sheets/${sheet.id}/devices`).set(bearer(tokens.designer)).send(nmosTargets()).expect(201);
     await t.http().post(`/api/sheets/${sheet.id}/revisions`).set(bearer(tokens.designer)).send({ message: 'r1' }).expect(201);
-    const auditBefore = await t.dataSource.query(`SELECT COUNT(*) AS "n" FROM "audit_events"`);
+    const auditBefore = await t.query(`SELECT COUNT(*) AS "n" FROM "audit_events"`);
     const refused = await t.http().delete(`/api/sheets/${sheet.id}`).set(bearer(tokens.designer)).expect(409);
     expect(refused.body.code).toBe('SHEET_HAS_REVISIONS');
     await t.http().get(`/api/sheets/${sheet.id}`).set(bearer(tokens.designer)).expect(200);
-    expect(await t.dataSource.query(`SELECT COUNT(*) AS "n" FROM "audit_events"`)).toEqual(auditBefore);
+    expect(await t.query(`SELECT COUNT(*) AS "n" FROM "audit_events"`)).toEqual(auditBefore);
   });
 });

@@ -20,7 +20,7 @@ describe('the audit trail', () => {
     for (const email of [reviewer.email, viewer.email]) {
       await t.http().post(`/api/projects/${projectId}/members`).set(bearer(await t.loginAs(designer.email))).send({ email, role: email === viewer.email ? 'viewer' : 'reviewer' }).expect(201);
     }
-    const users = await t.dataSource.query(`SELECT "id", "email" FROM "users"`);
+    const users = await t.query(`SELECT "id", "email" FROM "users"`);
     const idOf = (email: string) => users.find((u: { email: string }) => u.email === email).id as string;
     ids = { designer: idOf(designer.email), reviewer: idOf(reviewer.email) };
     const audit = t.app.get(AuditService);
@@ -101,9 +101,9 @@ describe('the audit trail', () => {
   });
 
   it('is append-only: the database refuses to update or delete an event', async () => {
-    const before = await t.dataSource.query(`SELECT * FROM "audit_events" ORDER BY "id"`);
-    await expect(t.dataSource.query(`UPDATE "audit_events" SET "summary" = 'rewritten'`)).rejects.toThrow(/append-only/);
-    await expect(t.dataSource.query(`DELETE FROM "audit_events"`)).rejects.toThrow(/append-only/);
-    expect(await t.dataSource.query(`SELECT * FROM "audit_events" ORDER BY "id"`)).toEqual(before);
+    const before = await t.query(`SELECT * FROM "audit_events" ORDER BY "id"`);
+    await expect(t.query(`UPDATE "audit_events" SET "summary" = 'rewritten'`)).rejects.toThrow(/append-only/);
+    await expect(t.query(`DELETE FROM "audit_events"`)).rejects.toThrow(/append-only/);
+    expect(await t.query(`SELECT * FROM "audit_events" ORDER BY "id"`)).toEqual(before);
   });
 });

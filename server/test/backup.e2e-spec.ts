@@ -28,7 +28,7 @@ describe('backup and restore of the embedded database', () => {
   });
 
   it('syncs every commit to disk (synchronous = FULL), so an acknowledged sign-off survives a power loss', async () => {
-    const [row] = await t.dataSource.query('PRAGMA synchronous');
+    const [row] = await t.query('PRAGMA synchronous');
     expect(row.synchronous).toBe(2); // 0 OFF, 1 NORMAL, 2 FULL, 3 EXTRA (SQLite documentation, 2024)
   });
 
@@ -52,7 +52,7 @@ describe('backup and restore of the embedded database', () => {
     copyFileSync(target, join(restoredDir, DATABASE_FILE_NAME));
     const restored = await createTestApp({ dataDir: restoredDir, seed: false });
     try {
-      const [check] = await restored.dataSource.query('PRAGMA integrity_check');
+      const [check] = await restored.query('PRAGMA integrity_check');
       expect(check.integrity_check).toBe('ok');
       const token = await restored.loginAs(DEMO_ACCOUNTS.designer.email);
       const devices = (await restored.http().get(`/api/sheets/${sheet.id}`).set(bearer(token)).expect(200)).body.devices as Array<{ id: string; name: string; result: { w: number } | null }>;

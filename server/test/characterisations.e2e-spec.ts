@@ -24,8 +24,8 @@ describe('characterisation jobs', () => {
 
   const start = (body: object, token = admin) => t.http().post('/api/characterisations').set(bearer(token)).send(body);
   const rowsOf = async (jobId: string) => {
-    const [tables] = await t.dataSource.query('SELECT COUNT(*) AS n FROM characterisation_tables WHERE "jobId" = ?', [jobId]);
-    const [chunks] = await t.dataSource.query('SELECT COUNT(*) AS n FROM characterisation_table_chunks WHERE "jobId" = ?', [jobId]);
+    const [tables] = await t.query('SELECT COUNT(*) AS n FROM characterisation_tables WHERE "jobId" = ?', [jobId]);
+    const [chunks] = await t.query('SELECT COUNT(*) AS n FROM characterisation_table_chunks WHERE "jobId" = ?', [jobId]);
     return { tables: Number(tables.n), chunks: Number(chunks.n) };
   };
 
@@ -84,13 +84,13 @@ describe('characterisation jobs', () => {
   });
 
   it('refuses a grid beyond 5 million points with 400 GRID_TOO_LARGE naming the field given, and stores no job', async () => {
-    const [before] = await t.dataSource.query('SELECT COUNT(*) AS n FROM characterisation_jobs');
+    const [before] = await t.query('SELECT COUNT(*) AS n FROM characterisation_jobs');
     const lengths = Array.from({ length: 40 }, (_, i) => 0.25e-6 * 1.1 ** i);
     const response = await start({ processId, grid: { lengths, vgsStep: 0.01, vds: Array.from({ length: 20 }, (_, i) => 0.1 * (i + 1)), temperatures: [-40, 0, 27, 85, 125] } }).expect(400);
     const body = apiErrorBodySchema.parse(response.body);
     expect(body).toMatchObject({ code: 'GRID_TOO_LARGE', field: 'grid.lengths' });
     expect(body.message).toMatch(/5,000,000/);
-    const [after] = await t.dataSource.query('SELECT COUNT(*) AS n FROM characterisation_jobs');
+    const [after] = await t.query('SELECT COUNT(*) AS n FROM characterisation_jobs');
     expect(after.n).toBe(before.n);
   });
 
@@ -165,8 +165,8 @@ describe('a characterisation whose server stops', () => {
       const token = await second.loginAs(DEMO_ACCOUNTS.admin.email);
       const last = (await followJob(second, token, job.id, finished)).at(-1) as CharacterisationJob;
       expect(last).toMatchObject({ status: 'failed', attempts: 1, error: { code: 'CHARACTERISATION_INTERRUPTED' } });
-      const [tables] = await second.dataSource.query('SELECT COUNT(*) AS n FROM characterisation_tables WHERE "jobId" = ?', [job.id]);
-      const [chunks] = await second.dataSource.query('SELECT COUNT(*) AS n FROM characterisation_table_chunks WHERE "jobId" = ?', [job.id]);
+      const [tables] = await second.query('SELECT COUNT(*) AS n FROM characterisation_tables WHERE "jobId" = ?', [job.id]);
+      const [chunks] = await second.query('SELECT COUNT(*) AS n FROM characterisation_table_chunks WHERE "jobId" = ?', [job.id]);
       expect([Number(tables.n), Number(chunks.n)]).toEqual([0, 0]);
     } finally {
       await second.close();

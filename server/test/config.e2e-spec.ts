@@ -4,8 +4,8 @@ import { createTestEnv, type TestEnv } from './helpers/test-env.js';
 
 describe('start-up configuration', () => {
   let testEnv: TestEnv;
-  beforeEach(() => {
-    testEnv = createTestEnv();
+  beforeEach(async () => {
+    testEnv = await createTestEnv();
   });
   afterEach(() => testEnv.remove());
 

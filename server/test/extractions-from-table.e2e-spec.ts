@@ -136,7 +136,7 @@ describe('fitting a profile from a characterised table', () => {
     it('saves as a new version whose message and audit entry name the table the points came from', async () => {
       const saved = (await t.http().post(`/api/extractions/${job.id}/save`).set(bearer(admin)).send({}).expect(201)).body;
       expect(saved.version.message).toMatch(/^Parameters fitted to the TT lines of a characterised table of T250-fit version 1 \(extraction /);
-      const [audit] = await t.dataSource.query(`SELECT * FROM "audit_events" WHERE "action" = 'extraction.saved' AND "entityId" = ?`, [processId]);
+      const [audit] = await t.query(`SELECT * FROM "audit_events" WHERE "action" = 'extraction.saved' AND "entityId" = ?`, [processId]);
       expect(JSON.parse(audit.after)).toMatchObject({ extractionId: job.id, source: { kind: 'table', tableId: table.id, sha256: table.sha256, corner: 'TT', version: 1 }, model: 'all-region' });
       expect(audit.summary).toContain(`to the TT lines of the NMOS table of T250-fit version 1 (SHA-256 ${table.sha256.slice(0, 12)}…)`);
     });

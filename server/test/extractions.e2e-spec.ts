@@ -53,8 +53,8 @@ describeWithNgspice('parameter extraction through the API (curves from ngspice l
   };
 
   const rowCounts = async () => {
-    const [{ n: uploads }] = await t.dataSource.query(`SELECT COUNT(*) AS "n" FROM "extraction_uploads"`);
-    const [{ n: extractions }] = await t.dataSource.query(`SELECT COUNT(*) AS "n" FROM "extractions"`);
+    const [{ n: uploads }] = await t.query(`SELECT COUNT(*) AS "n" FROM "extraction_uploads"`);
+    const [{ n: extractions }] = await t.query(`SELECT COUNT(*) AS "n" FROM "extractions"`);
     return { uploads, extractions };
   };
 
@@ -283,7 +283,7 @@ describeWithNgspice('parameter extraction through the API (curves from ngspice l
       const marked = extractionSchema.parse((await t.http().get(`/api/extractions/${job.id}`).set(bearer(admin)).expect(200)).body);
       expect(marked.savedAs).toEqual({ profileId: bf180.id, version: saved.latestVersion });
 
-      const [audit] = await t.dataSource.query(`SELECT * FROM "audit_events" WHERE "action" = 'extraction.saved' AND "entityId" = ?`, [bf180.id]);
+      const [audit] = await t.query(`SELECT * FROM "audit_events" WHERE "action" = 'extraction.saved' AND "entityId" = ?`, [bf180.id]);
       expect(audit).toBeTruthy();
       expect(JSON.parse(audit.after)).toMatchObject({ extractionId: job.id, version: saved.latestVersion, polarity: 'nmos', model: 'square-law' });
       expect(JSON.parse(audit.before).parameters.vt0).toBe(base.version.definition.nmos.vt0);

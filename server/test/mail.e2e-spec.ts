@@ -1,8 +1,9 @@
 import { receivedMailSchema } from '@channelwright/shared/schemas';
-import { runInTransaction } from '../src/database/run-in-transaction.js';
+import { UnitOfWork } from '../src/database/unit-of-work.js';
 import { MailDeliveryService } from '../src/mail/mail-delivery.service.js';
 import { MailSinkService } from '../src/mail/mail-sink.service.js';
 import { MailService } from '../src/mail/mail.service.js';
+import { OutboxMessageEntity } from '../src/mail/outbox-message.entity.js';
 import { DEMO_ACCOUNTS } from '../src/seed/demo-accounts.js';
 import { closedPort, outboxRows, receivedMail } from './helpers/mail.js';
 import { bearer, createTestApp, type TestApp } from './helpers/test-app.js';
@@ -52,12 +53,12 @@ describe('mail through the local SMTP sink (no SMTP_URL)', () => {
     const mail = t.app.get(MailService);
     const message = { to: 'rolled-back@brackenfold.example', subject: 'Never sent', text: 'x', html: '<p>x</p>', link: `${APP_URL}/` };
     await expect(
-      runInTransaction(t.dataSource, async (manager) => {
+      t.app.get(UnitOfWork).run(async (manager) => {
         await mail.send(message, manager);
         throw new Error('the change failed after the mail was written');
       }),
     ).rejects.toThrow('the change failed');
-    await runInTransaction(t.dataSource, (manager) => mail.send({ ...message, to: 'committed@brackenfold.example', subject: 'Sent' }, manager));
+    await t.app.get(UnitOfWork).run((manager) => mail.send({ ...message, to: 'committed@brackenfold.example', subject: 'Sent' }, manager));
     expect(await receivedMail(t, 'rolled-back@brackenfold.example')).toEqual([]);
     expect((await outboxRows(t)).map((r) => r.recipient)).not.toContain('rolled-back@brackenfold.example');
     expect((await receivedMail(t, 'committed@brackenfold.example')).map((m) => m.subject)).toEqual(['Sent']);
@@ -107,7 +108,7 @@ describe('mail when the SMTP server cannot be reached', () => {
 
   it('runs no sink, keeps the message queued with the error and a later attempt, and keeps what was committed', async () => {
     expect(t.app.get(MailSinkService).enabled).toBe(false);
-    await runInTransaction(t.dataSource, async (manager) => {
+    await t.app.get(UnitOfWork).run(async (manager) => {
       await manager.query(`INSERT INTO "users" ("id", "email", "displayName", "passwordHash") VALUES ('u-1', 'kept@brackenfold.example', 'Kept', 'x')`);
       await t.app.get(MailService).send({ to: 'kept@brackenfold.example', subject: 'Welcome', text: 'Hi', html: '<p>Hi</p>', link: 'http://localhost:3000/' }, manager);
     });
@@ -115,8 +116,8 @@ describe('mail when the SMTP server cannot be reached', () => {
     const [row] = await outboxRows(t);
     expect(row).toMatchObject({ recipient: 'kept@brackenfold.example', state: 'queued', attempts: 1 });
     expect(row!.lastError).toMatch(/ECONNREFUSED|connect/i);
-    const [next] = await t.dataSource.query(`SELECT "nextAttemptAt" > strftime('%Y-%m-%d %H:%M:%f', 'now') AS "later" FROM "outbox_messages"`);
-    expect(next.later).toBe(1);
-    expect(await t.dataSource.query(`SELECT "email" FROM "users"`)).toEqual([{ email: 'kept@brackenfold.example' }]);
+    const [next] = await t.dataSource.getRepository(OutboxMessageEntity).find();
+    expect(next!.nextAttemptAt.getTime()).toBeGreaterThan(Date.now());
+    expect(await t.query(`SELECT "email" FROM "users"`)).toEqual([{ email: 'kept@brackenfold.example' }]);
   });
 });

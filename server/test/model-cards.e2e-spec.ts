@@ -131,7 +131,7 @@ describe('model cards on process versions', () => {
   });
 
   it('never lets a stored version\'s card change (the immutability trigger covers it)', async () => {
-    await expect(t.dataSource.query(`UPDATE "process_versions" SET "modelCard" = 'x' WHERE "modelCard" IS NOT NULL`)).rejects.toThrow(/immutable/);
+    await expect(t.query(`UPDATE "process_versions" SET "modelCard" = 'x' WHERE "modelCard" IS NOT NULL`)).rejects.toThrow(/immutable/);
   });
 
   it('gives the invented demo processes their invented cards, mapped to every corner and device', async () => {

@@ -171,7 +171,7 @@ describe('the process-profile library', () => {
 
     it('refuses to change a stored version in the database itself', async () => {
       const created = await create('BF-IMMUTABLE-1');
-      await expect(t.dataSource.query(`UPDATE process_versions SET definition = '{}' WHERE id = ?`, [created.version.id])).rejects.toThrow(/immutable/);
+      await expect(t.query(`UPDATE process_versions SET definition = '{}' WHERE id = ?`, [created.version.id])).rejects.toThrow(/immutable/);
       const stored = (await t.http().get(`/api/processes/${created.id}`).set(bearer(admin)).expect(200)).body;
       expect(stored.version.definition.name).toBe('BF-IMMUTABLE-1');
     });
@@ -210,15 +210,15 @@ describe('the process-profile library', () => {
 
     it('refuses with 409 PROCESS_IN_USE to delete a profile a row elsewhere points at, and deletes nothing', async () => {
       // A stand-in for the sheets table: any table with a foreign key to a process version counts.
-      await t.dataSource.query(`CREATE TABLE "test_sheets" ("id" integer PRIMARY KEY, "processVersionId" varchar NOT NULL REFERENCES "process_versions" ("id"))`);
+      await t.query(`CREATE TABLE "test_sheets" ("id" varchar PRIMARY KEY, "processVersionId" varchar NOT NULL REFERENCES "process_versions" ("id"))`);
       const created = await create('BF-INUSE-1');
-      await t.dataSource.query(`INSERT INTO "test_sheets" ("processVersionId") VALUES (?)`, [created.version.id]);
+      await t.query(`INSERT INTO "test_sheets" ("id", "processVersionId") VALUES ('ts-1', ?)`, [created.version.id]);
       const before = await countLibraryRows(t.dataSource);
       const response = await t.http().delete(`/api/processes/${created.id}`).set(bearer(admin)).expect(409);
       expect(response.body).toMatchObject({ code: 'PROCESS_IN_USE' });
       expect(response.body.message).toContain('1 in test_sheets');
       expect(await countLibraryRows(t.dataSource)).toEqual(before);
-      await t.dataSource.query(`DROP TABLE "test_sheets"`);
+      await t.query(`DROP TABLE "test_sheets"`);
     });
   });
 

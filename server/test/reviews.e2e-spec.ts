@@ -150,7 +150,7 @@ describe('review and sign-off: designer → request → reviewer approves → si
     expect((await post(`/api/review-requests/${requestId}/decision`, tokens.reviewer, { decision: 'approve' }).expect(409)).body.code).toBe('REVIEW_ALREADY_DECIDED');
     expect((await post(`/api/review-requests/${requestId}/withdraw`, tokens.designer).expect(409)).body.code).toBe('REVIEW_ALREADY_DECIDED');
     expect((await post(`/api/revisions/${r1.id}/review-requests`, tokens.designer, { reviewerEmail: reviewer.email }).expect(409)).body.code).toBe('REVISION_SIGNED_OFF');
-    await expect(t.dataSource.query(`UPDATE "review_requests" SET "state" = 'open' WHERE "id" = ?`, [requestId])).rejects.toThrow(/final/);
+    await expect(t.query(`UPDATE "review_requests" SET "state" = 'open' WHERE "id" = ?`, [requestId])).rejects.toThrow(/final/);
     expect(await snapshotRows(t)).toEqual(before);
   });
 
@@ -217,8 +217,8 @@ describe('review and sign-off: designer → request → reviewer approves → si
     const [r4] = (await get(`/api/sheets/${amplifier.id}/revisions`, tokens.designer)).body;
     const [open] = reviewRequestListSchema.parse((await get('/api/review-requests?mine=assigned&state=open', tokens.reviewer).expect(200)).body);
     expect(open!.revision.id).toBe(r4.id);
-    await t.dataSource.query(`DROP TRIGGER "TRG_revision_devices_no_update"`);
-    await t.dataSource.query(`UPDATE "revision_devices" SET "targets" = replace("targets", '"multiplier":1', '"multiplier":2') WHERE "revisionId" = ?`, [r4.id]);
+    await t.dropTrigger('TRG_revision_devices_no_update', 'revision_devices');
+    await t.query(`UPDATE "revision_devices" SET "targets" = replace("targets", '"multiplier":1', '"multiplier":2') WHERE "revisionId" = ?`, [r4.id]);
     const before = await snapshotRows(t);
     expect((await post(`/api/review-requests/${open!.id}/decision`, tokens.reviewer, { decision: 'approve' }).expect(409)).body.code).toBe('REVISION_HASH_MISMATCH');
     expect(await snapshotRows(t)).toEqual(before);
@@ -265,18 +265,18 @@ describe('review and sign-off: designer → request → reviewer approves → si
     expect(await verify()).toMatchObject({ valid: true, problems: [], signatures: [{ signedHash: r1.hash, auditedHash: r1.hash, matches: true }] });
 
     // An insider edits a frozen result and re-computes the stored hash so the rows agree with it again.
-    for (const trigger of ['TRG_revision_devices_no_update', 'TRG_revisions_no_update', 'TRG_review_requests_final']) await t.dataSource.query(`DROP TRIGGER IF EXISTS "${trigger}"`);
-    const [row] = await t.dataSource.query(`SELECT "id", "result" FROM "revision_devices" WHERE "revisionId" = ? ORDER BY "position" LIMIT 1`, [r1.id]);
-    await t.dataSource.query(`UPDATE "revision_devices" SET "result" = ? WHERE "id" = ?`, [JSON.stringify({ ...JSON.parse(row.result), w: 9.99e-6 }), row.id]);
+    for (const [trigger, table] of [['TRG_revision_devices_no_update', 'revision_devices'], ['TRG_revisions_no_update', 'revisions'], ['TRG_review_requests_final', 'review_requests']]) await t.dropTrigger(trigger, table);
+    const [row] = await t.query(`SELECT "id", "result" FROM "revision_devices" WHERE "revisionId" = ? ORDER BY "position" LIMIT 1`, [r1.id]);
+    await t.query(`UPDATE "revision_devices" SET "result" = ? WHERE "id" = ?`, [JSON.stringify({ ...JSON.parse(row.result), w: 9.99e-6 }), row.id]);
     const revision = await t.dataSource.getRepository(RevisionEntity).findOneByOrFail({ id: r1.id });
     const rehashed = revisionHash(revision, await t.dataSource.getRepository(RevisionDeviceEntity).findBy({ revisionId: r1.id }));
-    await t.dataSource.query(`UPDATE "revisions" SET "hash" = ? WHERE "id" = ?`, [rehashed, r1.id]);
+    await t.query(`UPDATE "revisions" SET "hash" = ? WHERE "id" = ?`, [rehashed, r1.id]);
     const first = await verify();
     expect(first).toMatchObject({ valid: false, storedHash: rehashed, computedHash: rehashed, signatures: [{ signedHash: r1.hash, auditedHash: r1.hash, matches: false }] });
     expect(first.problems).toEqual([expect.stringContaining('differ from what was signed off')]);
 
     // Rewriting the decision's hash too still leaves the audit trail, which the database keeps append-only.
-    await t.dataSource.query(`UPDATE "review_requests" SET "signedHash" = ? WHERE "revisionId" = ? AND "state" = 'approved'`, [rehashed, r1.id]);
+    await t.query(`UPDATE "review_requests" SET "signedHash" = ? WHERE "revisionId" = ? AND "state" = 'approved'`, [rehashed, r1.id]);
     const second = await verify();
     expect(second).toMatchObject({ valid: false, signatures: [{ signedHash: rehashed, auditedHash: r1.hash, matches: false }] });
     expect(second.problems).toEqual([expect.stringContaining('differs from the one the audit trail recorded')]);

@@ -101,7 +101,7 @@ describe('revisions: freezing a sheet into an immutable, hashed snapshot', () =>
     const stale = await freeze(sheet.id, 'Before recompute', tokens.designer, 409);
     expect(stale.body.code).toBe('SHEET_RESULTS_STALE');
     expect(stale.body.message).toContain('M1');
-    const [count] = await t.dataSource.query(`SELECT COUNT(*) AS "n" FROM "revisions" WHERE "sheetId" IN (?, ?)`, [empty.id, sheet.id]);
+    const [count] = await t.query(`SELECT COUNT(*) AS "n" FROM "revisions" WHERE "sheetId" IN (?, ?)`, [empty.id, sheet.id]);
     expect(count.n).toBe(0);
     await t.http().post(`/api/sheets/${sheet.id}/recompute`).set(bearer(tokens.designer)).expect(200);
     const revision = revisionSchema.parse((await freeze(sheet.id, 'After recompute')).body);
@@ -157,19 +157,19 @@ describe('revisions: freezing a sheet into an immutable, hashed snapshot', () =>
 
   it('is guarded by the database too: UPDATE and DELETE of revisions and their devices are refused', async () => {
     const before = await snapshotRows(t);
-    await expect(t.dataSource.query(`UPDATE "revisions" SET "message" = 'rewritten'`)).rejects.toThrow(/immutable/);
-    await expect(t.dataSource.query(`UPDATE "revision_devices" SET "result" = NULL`)).rejects.toThrow(/immutable/);
-    await expect(t.dataSource.query(`DELETE FROM "revision_devices"`)).rejects.toThrow(/immutable/);
-    await expect(t.dataSource.query(`DELETE FROM "revisions"`)).rejects.toThrow(/immutable/);
+    await expect(t.query(`UPDATE "revisions" SET "message" = 'rewritten'`)).rejects.toThrow(/immutable/);
+    await expect(t.query(`UPDATE "revision_devices" SET "result" = NULL`)).rejects.toThrow(/immutable/);
+    await expect(t.query(`DELETE FROM "revision_devices"`)).rejects.toThrow(/immutable/);
+    await expect(t.query(`DELETE FROM "revisions"`)).rejects.toThrow(/immutable/);
     expect(await snapshotRows(t)).toEqual(before);
   });
 
   it('fails verification once a stored row was tampered with directly in the database', async () => {
     const [revision] = revisionListSchema.parse((await t.http().get(`/api/sheets/${amplifier.id}/revisions`).set(bearer(tokens.designer))).body).slice(-1);
-    await t.dataSource.query(`DROP TRIGGER "TRG_revision_devices_no_update"`);
-    const [row] = await t.dataSource.query(`SELECT "id", "result" FROM "revision_devices" WHERE "revisionId" = ? ORDER BY "position" LIMIT 1`, [revision!.id]);
+    await t.dropTrigger('TRG_revision_devices_no_update', 'revision_devices');
+    const [row] = await t.query(`SELECT "id", "result" FROM "revision_devices" WHERE "revisionId" = ? ORDER BY "position" LIMIT 1`, [revision!.id]);
     const result = JSON.parse(row.result);
-    await t.dataSource.query(`UPDATE "revision_devices" SET "result" = ? WHERE "id" = ?`, [JSON.stringify({ ...result, w: result.w * 1.01 }), row.id]);
+    await t.query(`UPDATE "revision_devices" SET "result" = ? WHERE "id" = ?`, [JSON.stringify({ ...result, w: result.w * 1.01 }), row.id]);
     const verify = await t.http().get(`/api/revisions/${revision!.id}/verify`).set(bearer(tokens.designer)).expect(200);
     expect(verify.body).toMatchObject({ valid: false, storedHash: revision!.hash });
     expect(verify.body.computedHash).toMatch(/^[0-9a-f]{64}$/);

@@ -15,7 +15,7 @@ describe('POST /api/sheets/:id/import', () => {
     return request.attach('file', Buffer.isBuffer(text) ? text : Buffer.from(text, 'utf8'), name);
   };
   const load = async () => sheetSchema.parse((await t.http().get(`/api/sheets/${sheet.id}`).set(bearer(tokens.designer)).expect(200)).body);
-  const snapshot = () => t.dataSource.query('SELECT "id", "name", "version", "targets" FROM "devices" WHERE "sheetId" = ? ORDER BY "position"', [sheet.id]);
+  const snapshot = () => t.query('SELECT "id", "name", "version", "targets" FROM "devices" WHERE "sheetId" = ? ORDER BY "position"', [sheet.id]);
 
   beforeAll(async () => {
     t = await createTestApp();

@@ -9,7 +9,7 @@ describe('POST /api/sheets/:id/match-groups/resize', () => {
   let amplifier: Sheet;
 
   const resize = (body: object, token = tokens.designer) => t.http().post(`/api/sheets/${amplifier.id}/match-groups/resize`).set(bearer(token)).send(body);
-  const rows = () => t.dataSource.query('SELECT "id", "version", "targets", "result" FROM "devices" WHERE "sheetId" = ? ORDER BY "position"', [amplifier.id]);
+  const rows = () => t.query('SELECT "id", "version", "targets", "result" FROM "devices" WHERE "sheetId" = ? ORDER BY "position"', [amplifier.id]);
 
   beforeAll(async () => {
     t = await createTestApp();

@@ -10,8 +10,8 @@ describe('POST /api/sheets/:id/migrate', () => {
   let bf130: { id: string; version: number };
 
   const migrate = (body: object, token = tokens.designer) => t.http().post(`/api/sheets/${amplifier.id}/migrate`).set(bearer(token)).send(body);
-  const sourceRows = () => t.dataSource.query('SELECT * FROM "devices" WHERE "sheetId" = ? ORDER BY "position"', [amplifier.id]);
-  const sourceSheet = () => t.dataSource.query('SELECT * FROM "sheets" WHERE "id" = ?', [amplifier.id]);
+  const sourceRows = () => t.query('SELECT * FROM "devices" WHERE "sheetId" = ? ORDER BY "position"', [amplifier.id]);
+  const sourceSheet = () => t.query('SELECT * FROM "sheets" WHERE "id" = ?', [amplifier.id]);
 
   beforeAll(async () => {
     t = await createTestApp();
@@ -23,7 +23,7 @@ describe('POST /api/sheets/:id/migrate', () => {
 
   it('previews every device re-solved on BF130-G beside the old figures, L scaled by the ratio of lmin, and writes nothing', async () => {
     const [rows, sheetRow] = [await sourceRows(), await sourceSheet()];
-    const count = (await t.dataSource.query('SELECT COUNT(*) AS n FROM "sheets"'))[0].n;
+    const count = (await t.query('SELECT COUNT(*) AS n FROM "sheets"'))[0].n;
     const preview = sheetMigrationSchema.parse((await migrate({ processId: bf130.id, preview: true }).expect(200)).body);
     expect(preview.sheet).toBeNull();
     expect(preview.to).toEqual({ processName: 'BF130-G', version: bf130.version, vdd: 1.2 });
@@ -44,7 +44,7 @@ describe('POST /api/sheets/:id/migrate', () => {
     }
     expect(await sourceRows()).toEqual(rows);
     expect(await sourceSheet()).toEqual(sheetRow);
-    expect((await t.dataSource.query('SELECT COUNT(*) AS n FROM "sheets"'))[0].n).toBe(count);
+    expect((await t.query('SELECT COUNT(*) AS n FROM "sheets"'))[0].n).toBe(count);
   });
 
   it('creates a new sheet on BF130-G with the re-solved devices and leaves the source untouched', async () => {

@@ -92,7 +92,7 @@ describe('stale results and recompute after a process version change', () => {
     const sheet = await newSheet(t, tokens.designer, projectId, profileId, 'Old engine');
     const created = await t.http().post(`/api/sheets/${sheet.id}/devices`).set(bearer(tokens.designer)).send(nmosTargets()).expect(201);
     // As if an older engine had computed it.
-    await t.dataSource.query('UPDATE "devices" SET "engineVersion" = ? WHERE "id" = ?', ['0.9.0', created.body.id]);
+    await t.query('UPDATE "devices" SET "engineVersion" = ? WHERE "id" = ?', ['0.9.0', created.body.id]);
     const old = await getSheet(sheet.id);
     expect(old.devices[0]).toMatchObject({ stale: true, staleReasons: ['engine'], computedWith: { engineVersion: '0.9.0' } });
     expect(old.stale).toBe(true);

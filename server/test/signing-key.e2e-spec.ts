@@ -8,6 +8,7 @@ import { createApp } from '../src/app.factory.js';
 import { SIGNING_KEY_FILE } from '../src/auth/signing-key.js';
 import { REPO_ROOT } from '../src/config/paths.js';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../src/seed/demo-accounts.js';
+import { testDatabaseUrl } from './helpers/test-database.js';
 
 /** Every quoted string of 8 to 200 characters in the repository's own files: what a reader of the source could sign with. */
 function stringsInTheSource(): string[] {
@@ -31,12 +32,15 @@ describe('the signing key of a server started without JWT_SECRET, as `npm start`
   const dataDir = mkdtempSync(join(tmpdir(), 'channelwright-key-'));
   // What main.ts reads from a shell with nothing set but where to keep the data: development mode, demo seeded (its
   // characterisation, which would only load the machine while this runs, left out).
-  const env = { DATA_DIR: dataDir, CLIENT_DIST: join(dataDir, 'no-client-build'), DEMO_CHARACTERISATION: 'false' };
+  const env: Record<string, string> = { DATA_DIR: dataDir, CLIENT_DIST: join(dataDir, 'no-client-build'), DEMO_CHARACTERISATION: 'false' };
   let app: NestExpressApplication;
   let adminId: string;
   const http = () => request(app.getHttpServer());
 
   beforeAll(async () => {
+    // In postgres mode the database is PostgreSQL's, made for this DATA_DIR (main.ts would read DATABASE_URL).
+    const database = await testDatabaseUrl(dataDir);
+    if (database) env.DATABASE_URL = database.url;
     app = await createApp({ env, logger: ['error'] });
     const login = await http().post('/api/auth/login').send({ email: DEMO_ACCOUNTS.admin.email, password: DEMO_PASSWORD }).expect(200);
     adminId = login.body.user.id;

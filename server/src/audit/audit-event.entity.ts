@@ -1,4 +1,5 @@
 import { Column, Entity, ForeignKey, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { COLUMN_TYPES } from '../database/column-types.js';
 
 /**
  * One entry of the append-only audit trail: who did what to which thing, when, with the state before
@@ -12,7 +13,7 @@ export class AuditEventEntity {
   @PrimaryGeneratedColumn()
   id: number;
 
-  @Column({ type: 'datetime' })
+  @Column({ type: COLUMN_TYPES.timestamp })
   at: Date;
 
   /** Null for the system itself (the demo seed, a start-up task). */

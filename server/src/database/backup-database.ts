@@ -13,6 +13,18 @@ export interface BackupResult {
 }
 
 /**
+ * Why `npm run backup` cannot copy the configured database, or undefined when it can: it copies SQLite's file only;
+ * PostgreSQL's own pg_dump takes a consistent copy of a live PostgreSQL database.
+ */
+export function backupRefusal(config: { databaseUrl?: string }): string | undefined {
+  if (config.databaseUrl === undefined) return undefined;
+  return [
+    'DATABASE_URL names a PostgreSQL database: npm run backup copies only the SQLite database in DATA_DIR.',
+    'Back up PostgreSQL with pg_dump, e.g. pg_dump --format=custom --file=channelwright.dump "$DATABASE_URL" (docs/operations.md).',
+  ].join('\n');
+}
+
+/**
  * A consistent copy of DATA_DIR's database while the server keeps running: SQLite's online backup API
  * (through better-sqlite3's `backup()`), which copies page by page and restarts when a writer changes a
  * page already copied, so the file is one committed state, never half a transaction. Written beside the

@@ -16,7 +16,7 @@ import { UnitOfWork } from './unit-of-work.js';
     TypeOrmModule.forRootAsync({
       inject: [AppConfigService],
       useFactory: (config: AppConfigService) => ({
-        ...dataSourceOptions(config.dataDir),
+        ...dataSourceOptions(config),
         autoLoadEntities: true,
         migrationsRun: true,
       }),

@@ -8,7 +8,7 @@ import { dataSourceOptions } from './data-source-options.js';
 
 try {
   const config = loadConfig();
-  const dataSource = await new DataSource(dataSourceOptions(config.dataDir)).initialize();
+  const dataSource = await new DataSource(dataSourceOptions(config)).initialize();
   const applied = await dataSource.runMigrations({ transaction: 'each' });
   await dataSource.destroy();
   console.log(applied.length === 0 ? 'The database is up to date.' : `Applied: ${applied.map((m) => m.name).join(', ')}`);

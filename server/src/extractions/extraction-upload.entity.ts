@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, ForeignKey, PrimaryGeneratedColumn } from 'typeorm';
+import { COLUMN_TYPES } from '../database/column-types.js';
 
 /**
  * An uploaded curve file, kept as it came (for re-runs and audit) with its SHA-256 and the form fields it was read
@@ -20,7 +21,7 @@ export class ExtractionUploadEntity {
   @Column({ type: 'integer' })
   bytes: number;
 
-  @Column({ type: 'blob' })
+  @Column({ type: COLUMN_TYPES.bytes })
   content: Buffer;
 
   /** JSON text of the CurveFileOptions the file is read with (polarity; W, L, fingers, temperature as typed). */
@@ -36,6 +37,6 @@ export class ExtractionUploadEntity {
   @ForeignKey('users', { name: 'FK_extraction_uploads_uploadedBy', onDelete: 'SET NULL' })
   uploadedById: string | null;
 
-  @CreateDateColumn()
+  @CreateDateColumn({ type: COLUMN_TYPES.timestamp })
   createdAt: Date;
 }

@@ -1,6 +1,7 @@
 import type { ExtractionStatus, Polarity } from '@channelwright/shared/schemas';
 import { Column, CreateDateColumn, Entity, ForeignKey, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation, UpdateDateColumn } from 'typeorm';
 import { ExtractionUploadEntity } from './extraction-upload.entity.js';
+import { COLUMN_TYPES } from '../database/column-types.js';
 
 /**
  * One fit of a profile's parameters to an upload's points: its options, its state and progress as a job (the row is
@@ -78,15 +79,15 @@ export class ExtractionEntity {
   @ForeignKey('users', { name: 'FK_extractions_createdBy', onDelete: 'SET NULL' })
   createdById: string | null;
 
-  @CreateDateColumn()
+  @CreateDateColumn({ type: COLUMN_TYPES.timestamp })
   createdAt: Date;
 
-  @Column({ type: 'datetime', nullable: true })
+  @Column({ type: COLUMN_TYPES.timestamp, nullable: true })
   startedAt: Date | null;
 
-  @Column({ type: 'datetime', nullable: true })
+  @Column({ type: COLUMN_TYPES.timestamp, nullable: true })
   finishedAt: Date | null;
 
-  @UpdateDateColumn()
+  @UpdateDateColumn({ type: COLUMN_TYPES.timestamp })
   updatedAt: Date;
 }

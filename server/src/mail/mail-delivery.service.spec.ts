@@ -24,7 +24,7 @@ describe('MailDeliveryService against an SMTP server that cannot be reached', ()
   let module: TestingModule;
 
   beforeEach(async () => {
-    testEnv = createTestEnv({ SEED_DEMO: 'false', SMTP_URL: `smtp://127.0.0.1:${await closedPort()}` });
+    testEnv = await createTestEnv({ SEED_DEMO: 'false', SMTP_URL: `smtp://127.0.0.1:${await closedPort()}` });
     module = await Test.createTestingModule({ imports: [ConfigModule.forRoot(loadConfig(testEnv.env)), DatabaseModule, MailModule] })
       .overrideProvider(MAIL_RETRY_POLICY)
       .useValue(QUICK_POLICY)
@@ -34,7 +34,7 @@ describe('MailDeliveryService against an SMTP server that cannot be reached', ()
   });
   afterEach(async () => {
     await module.close();
-    testEnv.remove();
+    await testEnv.remove();
   });
 
   it('retries with backoff and, after the last attempt, marks the message failed with the error kept', async () => {

@@ -7,6 +7,9 @@ import { OutboxMessageEntity } from './outbox-message.entity.js';
 
 const BATCH = 20;
 
+/** How long a claimed message is left to the process that claimed it before another may try it. */
+const CLAIM_MS = 5 * 60_000;
+
 /**
  * Delivers the outbox. `kick()` starts a round; each round reads the due messages through
  * the unit of work, which on SQLite queues behind every transaction already open, so a message written inside
@@ -80,6 +83,15 @@ export class MailDeliveryService implements OnApplicationBootstrap, OnModuleDest
   }
 
   private async attempt(message: OutboxMessageEntity): Promise<void> {
+    // Several server processes may share the outbox (PostgreSQL): a message is first claimed by moving its next
+    // attempt past now, on the condition that it is still due, so only one process sends it. A process that dies
+    // after claiming leaves it to be tried again when the claim runs out.
+    const claimed = await this.unitOfWork.run((manager) =>
+      manager
+        .getRepository(OutboxMessageEntity)
+        .update({ id: message.id, state: 'queued', nextAttemptAt: LessThanOrEqual(new Date()) }, { nextAttemptAt: new Date(Date.now() + CLAIM_MS) }),
+    );
+    if (claimed.affected !== 1) return;
     const attempts = message.attempts + 1;
     try {
       await this.transport.deliver({ to: message.recipient, subject: message.subject, text: message.text, html: message.html, link: message.link });

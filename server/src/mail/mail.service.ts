@@ -35,7 +35,8 @@ export class MailService {
         }),
       );
     const stored = manager ? await write(manager) : await this.unitOfWork.run(write);
-    this.delivery.kick();
+    // Delivery reads the outbox on a connection of its own: it starts once the message is committed.
+    this.unitOfWork.afterCommit(manager, () => this.delivery.kick());
     return stored;
   }
 

@@ -2,6 +2,7 @@ import type { ListMailQuery, ListOutboxQuery, OutboxMessage, ReceivedMail } from
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import type { Repository } from 'typeorm';
+import { engineOf } from '../database/database-engine.js';
 import { OutboxMessageEntity } from './outbox-message.entity.js';
 import { ReceivedMailEntity } from './received-mail.entity.js';
 
@@ -16,18 +17,29 @@ export class MailboxService {
   /** Received messages; `to` matches part of an envelope recipient, `exactTo` the whole address. */
   async received(query: ListMailQuery & { exactTo?: string }): Promise<ReceivedMail[]> {
     const builder = this.receivedMail.createQueryBuilder('mail');
-    if (query.to) builder.andWhere(`EXISTS (SELECT 1 FROM json_each("mail"."recipients") WHERE value LIKE :pattern ESCAPE '\\')`, { pattern: `%${likeEscape(query.to)}%` });
-    if (query.exactTo) builder.andWhere(`EXISTS (SELECT 1 FROM json_each("mail"."recipients") WHERE value = :exact)`, { exact: query.exactTo.toLowerCase() });
+    const { like, recipients } = this.dialect();
+    if (query.to) builder.andWhere(`EXISTS (SELECT 1 FROM ${recipients} WHERE value ${like} :pattern ESCAPE '\\')`, { pattern: `%${likeEscape(query.to)}%` });
+    if (query.exactTo) builder.andWhere(`EXISTS (SELECT 1 FROM ${recipients} WHERE value = :exact)`, { exact: query.exactTo.toLowerCase() });
     const rows = await builder.orderBy('mail.receivedAt', 'DESC').addOrderBy('mail.id').take(query.limit).getMany();
     return rows.map(toReceivedMail);
   }
 
   async outbox(query: ListOutboxQuery): Promise<OutboxMessage[]> {
     const builder = this.outboxMessages.createQueryBuilder('message');
-    if (query.to) builder.andWhere(`"message"."recipient" LIKE :pattern ESCAPE '\\'`, { pattern: `%${likeEscape(query.to)}%` });
+    if (query.to) builder.andWhere(`"message"."recipient" ${this.dialect().like} :pattern ESCAPE '\\'`, { pattern: `%${likeEscape(query.to)}%` });
     if (query.state) builder.andWhere('message.state = :state', { state: query.state });
     const rows = await builder.orderBy('message.createdAt', 'DESC').addOrderBy('message.id').take(query.limit).getMany();
     return rows.map(toOutboxMessage);
+  }
+
+  /**
+   * SQLite's LIKE ignores the case of (ASCII) letters, PostgreSQL's ILIKE does; the recipients (a JSON list in text) are
+   * read one per row by json_each or json_array_elements_text, each row's `value`.
+   */
+  private dialect(): { like: string; recipients: string } {
+    return engineOf(this.receivedMail.manager) === 'postgres'
+      ? { like: 'ILIKE', recipients: `json_array_elements_text("mail"."recipients"::json)` }
+      : { like: 'LIKE', recipients: `json_each("mail"."recipients")` };
   }
 }
 

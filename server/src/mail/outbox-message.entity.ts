@@ -1,5 +1,6 @@
 import { OUTBOX_STATES, type OutboxState } from '@channelwright/shared/schemas';
 import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { COLUMN_TYPES } from '../database/column-types.js';
 
 /**
  * A message the server means to send. Written first (in the transaction of the change it reports),
@@ -12,7 +13,7 @@ export class OutboxMessageEntity {
   @PrimaryGeneratedColumn('uuid')
   id: string;
 
-  @CreateDateColumn()
+  @CreateDateColumn({ type: COLUMN_TYPES.timestamp })
   createdAt: Date;
 
   /** The one recipient's address, lower-case. */
@@ -42,9 +43,9 @@ export class OutboxMessageEntity {
   lastError: string | null;
 
   /** When a queued message is next due for an attempt. */
-  @Column({ type: 'datetime' })
+  @Column({ type: COLUMN_TYPES.timestamp })
   nextAttemptAt: Date;
 
-  @Column({ type: 'datetime', nullable: true })
+  @Column({ type: COLUMN_TYPES.timestamp, nullable: true })
   sentAt: Date | null;
 }

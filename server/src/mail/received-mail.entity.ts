@@ -1,4 +1,5 @@
 import { Column, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import { COLUMN_TYPES } from '../database/column-types.js';
 
 /** A message the local SMTP sink received (only when SMTP_URL is unset), parsed into its parts. */
 @Entity('received_mail')
@@ -6,7 +7,7 @@ export class ReceivedMailEntity {
   @PrimaryGeneratedColumn('uuid')
   id: string;
 
-  @Column({ type: 'datetime' })
+  @Column({ type: COLUMN_TYPES.timestamp })
   receivedAt: Date;
 
   /** The From header as sent ("Name <address>"). */

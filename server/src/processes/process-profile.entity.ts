@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, ForeignKey, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { COLUMN_TYPES } from '../database/column-types.js';
 
 /** A named process in the library. Its numbers live in immutable ProcessVersionEntity rows; this row points at the latest. */
 @Entity('process_profiles')
@@ -32,10 +33,10 @@ export class ProcessProfileEntity {
   @Column({ type: 'integer' })
   latestVersion: number;
 
-  @CreateDateColumn()
+  @CreateDateColumn({ type: COLUMN_TYPES.timestamp })
   createdAt: Date;
 
-  @UpdateDateColumn()
+  @UpdateDateColumn({ type: COLUMN_TYPES.timestamp })
   updatedAt: Date;
 
   /** An account (the users module's table, read through UsersService). */

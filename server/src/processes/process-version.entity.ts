@@ -1,5 +1,6 @@
 import { Column, CreateDateColumn, Entity, ForeignKey, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
 import { ProcessProfileEntity } from './process-profile.entity.js';
+import { COLUMN_TYPES } from '../database/column-types.js';
 
 /**
  * One immutable version of a profile: the full process definition as the shared processSchema
@@ -58,6 +59,6 @@ export class ProcessVersionEntity {
   @ForeignKey('users', { name: 'FK_process_versions_author', onDelete: 'SET NULL' })
   authorId: string | null;
 
-  @CreateDateColumn()
+  @CreateDateColumn({ type: COLUMN_TYPES.timestamp })
   createdAt: Date;
 }

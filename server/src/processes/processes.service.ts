@@ -188,8 +188,8 @@ export class ProcessesService {
         const references = await findReferences(
           manager,
           [
-            { table: 'process_profiles', where: '"id" = ?', params: [id] },
-            { table: 'process_versions', where: '"profileId" = ?', params: [id] },
+            { table: 'process_profiles', column: 'id', value: id },
+            { table: 'process_versions', column: 'profileId', value: id },
           ],
           OWN_TABLES,
         );

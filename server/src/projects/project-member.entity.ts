@@ -1,6 +1,7 @@
 import { PROJECT_ROLES, type ProjectRole } from '@channelwright/shared/schemas';
 import { Column, CreateDateColumn, Entity, ForeignKey, Index, JoinColumn, ManyToOne, PrimaryColumn, type Relation } from 'typeorm';
 import { ProjectEntity } from './project.entity.js';
+import { COLUMN_TYPES } from '../database/column-types.js';
 
 /** One person's role in one project. A project always keeps at least one owner. */
 @Entity('project_members')
@@ -21,6 +22,6 @@ export class ProjectMemberEntity {
   @Column({ type: 'simple-enum', enum: PROJECT_ROLES })
   role: ProjectRole;
 
-  @CreateDateColumn()
+  @CreateDateColumn({ type: COLUMN_TYPES.timestamp })
   createdAt: Date;
 }

@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, ForeignKey, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { COLUMN_TYPES } from '../database/column-types.js';
 
 /** A project: the sheets of one chip block and the people who work on them (ProjectMemberEntity). */
 @Entity('projects')
@@ -21,9 +22,9 @@ export class ProjectEntity {
   @ForeignKey('users', { name: 'FK_projects_createdBy', onDelete: 'SET NULL' })
   createdById: string | null;
 
-  @CreateDateColumn()
+  @CreateDateColumn({ type: COLUMN_TYPES.timestamp })
   createdAt: Date;
 
-  @UpdateDateColumn()
+  @UpdateDateColumn({ type: COLUMN_TYPES.timestamp })
   updatedAt: Date;
 }

@@ -1,5 +1,6 @@
 import { REVIEW_REQUEST_STATES, type ReviewRequestState } from '@channelwright/shared/schemas';
 import { Column, Entity, ForeignKey, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { COLUMN_TYPES } from '../database/column-types.js';
 
 /**
  * A request that one reviewer review one revision. Written `open`; changed exactly once, to approved,
@@ -36,11 +37,11 @@ export class ReviewRequestEntity {
   @Column({ type: 'simple-enum', enum: REVIEW_REQUEST_STATES, default: 'open' })
   state: ReviewRequestState;
 
-  @Column({ type: 'datetime' })
+  @Column({ type: COLUMN_TYPES.timestamp })
   createdAt: Date;
 
   /** When it was approved, sent back or withdrawn. */
-  @Column({ type: 'datetime', nullable: true })
+  @Column({ type: COLUMN_TYPES.timestamp, nullable: true })
   decidedAt: Date | null;
 
   @Column({ type: 'text', nullable: true })

@@ -1,4 +1,5 @@
 import { Column, Entity, ForeignKey, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { COLUMN_TYPES } from '../database/column-types.js';
 
 /** A comment on a revision, or on one of its devices. Part of the record: triggers refuse UPDATE and DELETE. */
 @Entity('revision_comments')
@@ -26,6 +27,6 @@ export class RevisionCommentEntity {
   @Column({ type: 'text' })
   body: string;
 
-  @Column({ type: 'datetime' })
+  @Column({ type: COLUMN_TYPES.timestamp })
   createdAt: Date;
 }

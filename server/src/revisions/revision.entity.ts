@@ -1,4 +1,5 @@
 import { Column, Entity, ForeignKey, Index, PrimaryColumn } from 'typeorm';
+import { COLUMN_TYPES } from '../database/column-types.js';
 
 /**
  * A frozen sheet: r1, r2 … per sheet. Every column is part of the snapshot and of its hash, so a
@@ -34,7 +35,7 @@ export class RevisionEntity {
   authorId: string;
 
   /** Set by the service (to the millisecond), because the hash covers it. */
-  @Column({ type: 'datetime' })
+  @Column({ type: COLUMN_TYPES.timestamp })
   createdAt: Date;
 
   /** JSON text of the sheet's own fields as frozen: name, description, temperature, corner, model. */

@@ -1,5 +1,6 @@
 import { Column, CreateDateColumn, Entity, ForeignKey, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn, type Relation } from 'typeorm';
 import { SheetEntity } from './sheet.entity.js';
+import { COLUMN_TYPES } from '../database/column-types.js';
 
 /**
  * One transistor of a sheet: its targets, and the result the engine computed for them (or the
@@ -47,16 +48,16 @@ export class DeviceEntity {
   @ForeignKey('process_versions', { name: 'FK_devices_processVersion', onDelete: 'RESTRICT' })
   processVersionId: string;
 
-  @Column({ type: 'datetime' })
+  @Column({ type: COLUMN_TYPES.timestamp })
   computedAt: Date;
 
   /** Optimistic concurrency: raised by every edit and every recompute. */
   @Column({ type: 'integer', default: 1 })
   version: number;
 
-  @CreateDateColumn()
+  @CreateDateColumn({ type: COLUMN_TYPES.timestamp })
   createdAt: Date;
 
-  @UpdateDateColumn()
+  @UpdateDateColumn({ type: COLUMN_TYPES.timestamp })
   updatedAt: Date;
 }

@@ -1,5 +1,6 @@
 import { MODELS } from '@channelwright/shared/schemas';
 import { Column, CreateDateColumn, Entity, ForeignKey, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { COLUMN_TYPES } from '../database/column-types.js';
 
 /** A sizing sheet: the devices of one circuit, on one process profile version, with their defaults. */
 @Entity('sheets')
@@ -25,7 +26,7 @@ export class SheetEntity {
   processVersionId: string;
 
   /** Default temperature of the devices, °C; the process tnom when null. */
-  @Column({ type: 'real', nullable: true })
+  @Column({ type: COLUMN_TYPES.double, nullable: true })
   temperature: number | null;
 
   @Column({ type: 'varchar', length: 50, default: 'TT' })
@@ -46,9 +47,9 @@ export class SheetEntity {
   @Column({ type: 'integer', default: 1 })
   version: number;
 
-  @CreateDateColumn()
+  @CreateDateColumn({ type: COLUMN_TYPES.timestamp })
   createdAt: Date;
 
-  @UpdateDateColumn()
+  @UpdateDateColumn({ type: COLUMN_TYPES.timestamp })
   updatedAt: Date;
 }

@@ -1,5 +1,6 @@
 import { GLOBAL_ROLES, type GlobalRole } from '@channelwright/shared/schemas';
 import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { COLUMN_TYPES } from '../database/column-types.js';
 
 @Entity('users')
 export class UserEntity {
@@ -35,9 +36,9 @@ export class UserEntity {
   @Column({ type: 'boolean', default: false })
   emailConfirmed: boolean;
 
-  @CreateDateColumn()
+  @CreateDateColumn({ type: COLUMN_TYPES.timestamp })
   createdAt: Date;
 
-  @UpdateDateColumn()
+  @UpdateDateColumn({ type: COLUMN_TYPES.timestamp })
   updatedAt: Date;
 }

@@ -7,6 +7,7 @@ import type { EnvSource } from '../../src/config/load-config.js';
 import { MailDeliveryService } from '../../src/mail/mail-delivery.service.js';
 import { MailboxService } from '../../src/mail/mailbox.service.js';
 import { DEMO_PASSWORD } from '../../src/seed/demo-accounts.js';
+import { portableSql, TEST_DATABASE_ENGINE } from './test-database.js';
 import { createTestEnv } from './test-env.js';
 
 export interface TestAppOptions {
@@ -20,8 +21,12 @@ export interface TestAppOptions {
 
 export interface TestApp {
   app: NestExpressApplication;
-  /** The real SQLite database behind the app, for checks (and deliberate tampering) in tests. */
+  /** The real database behind the app (SQLite, or PostgreSQL in postgres mode), for checks (and deliberate tampering) in tests. */
   dataSource: DataSource;
+  /** Raw SQL on that database with SQLite's `?` placeholders (numbered for PostgreSQL). */
+  query: DataSource['query'];
+  /** Drops a trigger (to tamper with what it guards). */
+  dropTrigger(name: string, table: string): Promise<void>;
   dataDir: string;
   /** A supertest client for the app: `t.http().get('/api/health')`. */
   http(): ReturnType<typeof request>;
@@ -33,14 +38,14 @@ export interface TestApp {
   close(options?: { keepData?: boolean }): Promise<void>;
 }
 
-/** The real app (real migrations, real SQLite file) on a temporary DATA_DIR of its own. */
+/** The real app (real migrations, a real SQLite file or PostgreSQL database) on a temporary DATA_DIR of its own. */
 export async function createTestApp(options: TestAppOptions = {}): Promise<TestApp> {
-  const testEnv = createTestEnv({ SEED_DEMO: String(options.seed ?? true), ...options.env }, options.dataDir);
+  const testEnv = await createTestEnv({ SEED_DEMO: String(options.seed ?? true), ...options.env }, options.dataDir);
   let app: NestExpressApplication;
   try {
     app = await createApp({ env: testEnv.env, logger: ['error'] });
   } catch (error) {
-    testEnv.remove();
+    await testEnv.remove();
     throw error;
   }
   const http = () => request(app.getHttpServer());
@@ -50,6 +55,10 @@ export async function createTestApp(options: TestAppOptions = {}): Promise<TestA
     app,
     dataSource: app.get(DataSource),
     dataDir: testEnv.dataDir,
+    query: (sql: string, params?: unknown[]) => app.get(DataSource).query(portableSql(sql), params),
+    async dropTrigger(name, table) {
+      await app.get(DataSource).query(TEST_DATABASE_ENGINE === 'postgres' ? `DROP TRIGGER IF EXISTS "${name}" ON "${table}"` : `DROP TRIGGER IF EXISTS "${name}"`);
+    },
     http,
     // Cached so a test file that signs in often does not run into the sign-in throttle.
     async loginAs(email, password = DEMO_PASSWORD) {
@@ -72,7 +81,7 @@ export async function createTestApp(options: TestAppOptions = {}): Promise<TestA
     },
     async close(closing = {}) {
       await app.close();
-      if (!closing.keepData) testEnv.remove();
+      if (!closing.keepData) await testEnv.remove();
     },
   };
 }

@@ -11,11 +11,11 @@ export interface TestModule {
 }
 
 /**
- * A Nest module for a service spec: configuration and the real migrated SQLite database in a
+ * A Nest module for a service spec: configuration and the real migrated database (SQLite, or PostgreSQL in postgres mode) in a
  * temporary DATA_DIR, plus the feature modules under test. Demo seeding is off unless asked for.
  */
 export async function createTestModule(imports: Array<Type | DynamicModule>, env: EnvSource = {}): Promise<TestModule> {
-  const testEnv = createTestEnv({ SEED_DEMO: 'false', ...env });
+  const testEnv = await createTestEnv({ SEED_DEMO: 'false', ...env });
   const module = await Test.createTestingModule({
     imports: [ConfigModule.forRoot(loadConfig(testEnv.env)), DatabaseModule, ...imports],
   }).compile();
@@ -25,7 +25,7 @@ export async function createTestModule(imports: Array<Type | DynamicModule>, env
     module,
     async close() {
       await module.close();
-      testEnv.remove();
+      await testEnv.remove();
     },
   };
 }

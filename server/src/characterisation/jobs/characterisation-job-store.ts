@@ -1,6 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { type EntityManager, In, LessThan, QueryFailedError, type Repository } from 'typeorm';
+import { engineOf, rowLock } from '../../database/database-engine.js';
 import { UnitOfWork } from '../../database/unit-of-work.js';
 import type { PackedTable } from '../table-storage.js';
 import { randomUUID } from 'node:crypto';
@@ -59,7 +60,10 @@ export class CharacterisationJobStore {
     const jobs = manager.getRepository(CharacterisationJobEntity);
     try {
       const row = jobs.create({ ...job, plan: JSON.stringify(job.plan), status: 'queued', done: 0, total, attempts: 0, cancelRequested: false });
-      return { job: await jobs.save(row), created: true };
+      // On PostgreSQL a failed statement spoils the transaction it runs in: inside the caller's, the insert gets a savepoint.
+      const inCallersTransaction = engineOf(manager) === 'postgres' && manager.queryRunner?.isTransactionActive === true;
+      const saved = inCallersTransaction ? await manager.transaction((savepoint) => savepoint.getRepository(CharacterisationJobEntity).save(row)) : await jobs.save(row);
+      return { job: saved, created: true };
     } catch (error) {
       if (!(error instanceof QueryFailedError && /UNIQUE/i.test(error.message))) throw error;
       const existing = await this.findActive(job.processVersionId, job.gridHash);
@@ -68,13 +72,20 @@ export class CharacterisationJobStore {
     }
   }
 
-  /** Claims the oldest queued job for `owner` (the update is conditional on it still being queued); its id, or null when none waits. */
-  async claimNext(owner: string): Promise<string | null> {
-    const next = await this.jobs.findOne({ select: { id: true, attempts: true, startedAt: true }, where: { status: 'queued' }, order: { createdAt: 'ASC' } });
-    if (!next) return null;
-    const now = new Date();
-    const claimed = await this.jobs.update({ id: next.id, status: 'queued' }, { status: 'running', owner, heartbeatAt: now, attempts: next.attempts + 1, startedAt: next.startedAt ?? now });
-    return claimed.affected === 1 ? next.id : null;
+  /**
+   * Claims the oldest queued job for `owner`; its id, or null when none waits. The update is conditional on the job still
+   * being queued, and on PostgreSQL the row is locked as it is read, passing over jobs another server is claiming
+   * (FOR UPDATE SKIP LOCKED), so two servers never take the same job and neither waits for the other.
+   */
+  claimNext(owner: string): Promise<string | null> {
+    return this.unitOfWork.run(async (manager) => {
+      const jobs = manager.getRepository(CharacterisationJobEntity);
+      const next = await jobs.findOne({ select: { id: true, attempts: true, startedAt: true }, where: { status: 'queued' }, order: { createdAt: 'ASC' }, lock: rowLock(manager, { skipLocked: true }) });
+      if (!next) return null;
+      const now = new Date();
+      const claimed = await jobs.update({ id: next.id, status: 'queued' }, { status: 'running', owner, heartbeatAt: now, attempts: next.attempts + 1, startedAt: next.startedAt ?? now });
+      return claimed.affected === 1 ? next.id : null;
+    });
   }
 
   /**
@@ -155,7 +166,8 @@ export class CharacterisationJobStore {
       await new Promise((resolve) => setImmediate(resolve));
     }
     return this.unitOfWork.run(async (manager) => {
-      const job = await manager.getRepository(CharacterisationJobEntity).findOneBy({ id: jobId, owner, status: 'running' });
+      // Locked until the table is stored: a take-over or an end of the job waits for it (on PostgreSQL; SQLite queues transactions).
+      const job = await manager.getRepository(CharacterisationJobEntity).findOne({ where: { id: jobId, owner, status: 'running' }, lock: rowLock(manager) });
       if (!job) return false;
       const tables = manager.getRepository(CharacterisationTableEntity);
       await tables.insert(
@@ -210,7 +222,7 @@ export class CharacterisationJobStore {
   async end(id: string, owner: string | null, end: JobEnd): Promise<boolean> {
     return this.unitOfWork.run(async (manager) => {
       const jobs = manager.getRepository(CharacterisationJobEntity);
-      const job = await jobs.findOneBy({ id });
+      const job = await jobs.findOne({ where: { id }, lock: rowLock(manager) });
       const own = job && (owner === null ? job.status === 'queued' : job.status === 'running' && job.owner === owner);
       if (!job || !own) return false;
       await manager.getRepository(CharacterisationTableChunkEntity).delete({ jobId: id });

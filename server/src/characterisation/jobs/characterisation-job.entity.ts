@@ -1,5 +1,6 @@
 import type { CharacterisationStatus } from '@channelwright/shared/schemas';
 import { Column, CreateDateColumn, Entity, ForeignKey, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { COLUMN_TYPES } from '../../database/column-types.js';
 
 /**
  * One characterisation of a process version's model card over a grid: its plan (the devices and their resolved
@@ -36,7 +37,7 @@ export class CharacterisationJobEntity {
   @Column({ type: 'integer' })
   total: number;
 
-  @Column({ type: 'real', nullable: true })
+  @Column({ type: COLUMN_TYPES.double, nullable: true })
   etaSeconds: number | null;
 
   /** JSON text of { code, message } for a failed or cancelled job. */
@@ -59,7 +60,7 @@ export class CharacterisationJobEntity {
   owner: string | null;
 
   /** When the running server last reported; a job silent for longer than the lease is taken over. */
-  @Column({ type: 'datetime', nullable: true })
+  @Column({ type: COLUMN_TYPES.timestamp, nullable: true })
   heartbeatAt: Date | null;
 
   /** An account (the users module's table, read through UsersService). */
@@ -67,15 +68,15 @@ export class CharacterisationJobEntity {
   @ForeignKey('users', { name: 'FK_characterisation_jobs_requestedBy', onDelete: 'SET NULL' })
   requestedById: string | null;
 
-  @CreateDateColumn()
+  @CreateDateColumn({ type: COLUMN_TYPES.timestamp })
   createdAt: Date;
 
-  @Column({ type: 'datetime', nullable: true })
+  @Column({ type: COLUMN_TYPES.timestamp, nullable: true })
   startedAt: Date | null;
 
-  @Column({ type: 'datetime', nullable: true })
+  @Column({ type: COLUMN_TYPES.timestamp, nullable: true })
   finishedAt: Date | null;
 
-  @UpdateDateColumn()
+  @UpdateDateColumn({ type: COLUMN_TYPES.timestamp })
   updatedAt: Date;
 }

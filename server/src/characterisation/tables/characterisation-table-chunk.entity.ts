@@ -1,4 +1,5 @@
 import { Column, Entity, ForeignKey, Index, PrimaryColumn } from 'typeorm';
+import { COLUMN_TYPES } from '../../database/column-types.js';
 
 /**
  * A slice of a stored table's bytes. better-sqlite3 is synchronous: one 20 MB blob written or read at once holds the
@@ -19,7 +20,7 @@ export class CharacterisationTableChunkEntity {
   @ForeignKey('characterisation_jobs', { name: 'FK_characterisation_table_chunks_job', onDelete: 'CASCADE' })
   jobId: string;
 
-  @Column({ type: 'blob' })
+  @Column({ type: COLUMN_TYPES.bytes })
   data: Buffer;
 }
 

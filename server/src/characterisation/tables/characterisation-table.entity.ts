@@ -1,5 +1,6 @@
 import { Column, CreateDateColumn, Entity, ForeignKey, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
 import { CharacterisationJobEntity } from '../jobs/characterisation-job.entity.js';
+import { COLUMN_TYPES } from '../../database/column-types.js';
 
 /**
  * One lookup table of a device (polarity and flavour) of a process version: the SHA-256 of the encoded table and its
@@ -54,6 +55,6 @@ export class CharacterisationTableEntity {
   @Column({ type: 'text' })
   grid: string;
 
-  @CreateDateColumn()
+  @CreateDateColumn({ type: COLUMN_TYPES.timestamp })
   createdAt: Date;
 }

@@ -1,4 +1,5 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
+import { createRefusingTrigger, dropTrigger, execute } from './dialect.js';
 
 /**
  * The process-profile library: profiles (name unique regardless of case through nameKey) and their
@@ -9,24 +10,22 @@ export class CreateProcessProfiles1796250000000 implements MigrationInterface {
   name = 'CreateProcessProfiles1796250000000';
 
   async up(queryRunner: QueryRunner): Promise<void> {
-    await queryRunner.query(
+    await execute(queryRunner,
       `CREATE TABLE "process_profiles" ("id" varchar PRIMARY KEY NOT NULL, "name" varchar(100) NOT NULL, "nameKey" varchar(100) NOT NULL, "description" text NOT NULL DEFAULT (''), "nodeClass" varchar(50) NOT NULL DEFAULT (''), "deprecated" boolean NOT NULL DEFAULT (0), "demoData" boolean NOT NULL DEFAULT (0), "latestVersion" integer NOT NULL, "createdAt" datetime NOT NULL DEFAULT (datetime('now')), "updatedAt" datetime NOT NULL DEFAULT (datetime('now')), "updatedById" varchar, CONSTRAINT "FK_process_profiles_updatedBy" FOREIGN KEY ("updatedById") REFERENCES "users" ("id") ON DELETE SET NULL ON UPDATE NO ACTION)`,
     );
-    await queryRunner.query(`CREATE UNIQUE INDEX "IDX_process_profiles_nameKey" ON "process_profiles" ("nameKey")`);
-    await queryRunner.query(
+    await execute(queryRunner, `CREATE UNIQUE INDEX "IDX_process_profiles_nameKey" ON "process_profiles" ("nameKey")`);
+    await execute(queryRunner,
       `CREATE TABLE "process_versions" ("id" varchar PRIMARY KEY NOT NULL, "profileId" varchar NOT NULL, "number" integer NOT NULL, "schemaVersion" integer NOT NULL DEFAULT (1), "definition" text NOT NULL, "message" varchar(500) NOT NULL DEFAULT (''), "authorId" varchar, "createdAt" datetime NOT NULL DEFAULT (datetime('now')), CONSTRAINT "FK_process_versions_profile" FOREIGN KEY ("profileId") REFERENCES "process_profiles" ("id") ON DELETE RESTRICT ON UPDATE NO ACTION, CONSTRAINT "FK_process_versions_author" FOREIGN KEY ("authorId") REFERENCES "users" ("id") ON DELETE SET NULL ON UPDATE NO ACTION)`,
     );
-    await queryRunner.query(`CREATE UNIQUE INDEX "IDX_process_versions_profile_number" ON "process_versions" ("profileId", "number")`);
-    await queryRunner.query(
-      `CREATE TRIGGER "TRG_process_versions_immutable" BEFORE UPDATE OF "id", "profileId", "number", "schemaVersion", "definition", "message", "createdAt" ON "process_versions" BEGIN SELECT RAISE(ABORT, 'process versions are immutable'); END`,
-    );
+    await execute(queryRunner, `CREATE UNIQUE INDEX "IDX_process_versions_profile_number" ON "process_versions" ("profileId", "number")`);
+    await createRefusingTrigger(queryRunner, { name: 'TRG_process_versions_immutable', table: 'process_versions', event: 'UPDATE', columns: ['id', 'profileId', 'number', 'schemaVersion', 'definition', 'message', 'createdAt'], message: 'process versions are immutable' });
   }
 
   async down(queryRunner: QueryRunner): Promise<void> {
-    await queryRunner.query(`DROP TRIGGER "TRG_process_versions_immutable"`);
-    await queryRunner.query(`DROP INDEX "IDX_process_versions_profile_number"`);
-    await queryRunner.query(`DROP TABLE "process_versions"`);
-    await queryRunner.query(`DROP INDEX "IDX_process_profiles_nameKey"`);
-    await queryRunner.query(`DROP TABLE "process_profiles"`);
+    await dropTrigger(queryRunner, 'TRG_process_versions_immutable', 'process_versions');
+    await execute(queryRunner, `DROP INDEX "IDX_process_versions_profile_number"`);
+    await execute(queryRunner, `DROP TABLE "process_versions"`);
+    await execute(queryRunner, `DROP INDEX "IDX_process_profiles_nameKey"`);
+    await execute(queryRunner, `DROP TABLE "process_profiles"`);
   }
 }

@@ -1,4 +1,5 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
+import { execute } from './dialect.js';
 
 /**
  * Mail: the outbox (every message the server sends, with its delivery state, written in the
@@ -8,18 +9,18 @@ export class CreateMail1796400000000 implements MigrationInterface {
   name = 'CreateMail1796400000000';
 
   async up(queryRunner: QueryRunner): Promise<void> {
-    await queryRunner.query(
+    await execute(queryRunner,
       `CREATE TABLE "outbox_messages" ("id" varchar PRIMARY KEY NOT NULL, "createdAt" datetime NOT NULL DEFAULT (datetime('now')), "recipient" varchar(254) NOT NULL, "subject" varchar(300) NOT NULL, "text" text NOT NULL, "html" text NOT NULL, "link" varchar(2000) NOT NULL, "state" varchar CHECK( "state" IN ('queued','sent','failed') ) NOT NULL DEFAULT ('queued'), "attempts" integer NOT NULL DEFAULT (0), "lastError" text, "nextAttemptAt" datetime NOT NULL, "sentAt" datetime)`,
     );
-    await queryRunner.query(`CREATE INDEX "IDX_outbox_messages_state_next" ON "outbox_messages" ("state", "nextAttemptAt")`);
-    await queryRunner.query(
+    await execute(queryRunner, `CREATE INDEX "IDX_outbox_messages_state_next" ON "outbox_messages" ("state", "nextAttemptAt")`);
+    await execute(queryRunner,
       `CREATE TABLE "received_mail" ("id" varchar PRIMARY KEY NOT NULL, "receivedAt" datetime NOT NULL, "sender" varchar(500) NOT NULL, "recipients" text NOT NULL, "subject" varchar(1000) NOT NULL, "text" text NOT NULL, "html" text NOT NULL, "messageId" varchar(500))`,
     );
   }
 
   async down(queryRunner: QueryRunner): Promise<void> {
-    await queryRunner.query(`DROP TABLE "received_mail"`);
-    await queryRunner.query(`DROP INDEX "IDX_outbox_messages_state_next"`);
-    await queryRunner.query(`DROP TABLE "outbox_messages"`);
+    await execute(queryRunner, `DROP TABLE "received_mail"`);
+    await execute(queryRunner, `DROP INDEX "IDX_outbox_messages_state_next"`);
+    await execute(queryRunner, `DROP TABLE "outbox_messages"`);
   }
 }

@@ -1,4 +1,5 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
+import { createRefusingTrigger, dropTrigger, execute } from './dialect.js';
 
 /**
  * Revisions: immutable numbered snapshots of a sheet and of its devices, with their SHA-256 hash.
@@ -9,30 +10,30 @@ export class CreateRevisions1796500000000 implements MigrationInterface {
   name = 'CreateRevisions1796500000000';
 
   async up(queryRunner: QueryRunner): Promise<void> {
-    await queryRunner.query(
+    await execute(queryRunner,
       `CREATE TABLE "revisions" ("id" varchar PRIMARY KEY NOT NULL, "sheetId" varchar NOT NULL, "projectId" varchar NOT NULL, "number" integer NOT NULL, "message" varchar(500) NOT NULL, "authorId" varchar NOT NULL, "createdAt" datetime NOT NULL, "sheetSnapshot" text NOT NULL, "processVersionId" varchar NOT NULL, "processProfileId" varchar NOT NULL, "processName" varchar(100) NOT NULL, "processVersionNumber" integer NOT NULL, "engineVersion" varchar(50) NOT NULL, "hash" varchar(64) NOT NULL, CONSTRAINT "FK_revisions_sheet" FOREIGN KEY ("sheetId") REFERENCES "sheets" ("id") ON DELETE RESTRICT ON UPDATE NO ACTION, CONSTRAINT "FK_revisions_project" FOREIGN KEY ("projectId") REFERENCES "projects" ("id") ON DELETE RESTRICT ON UPDATE NO ACTION, CONSTRAINT "FK_revisions_author" FOREIGN KEY ("authorId") REFERENCES "users" ("id") ON DELETE RESTRICT ON UPDATE NO ACTION, CONSTRAINT "FK_revisions_processVersion" FOREIGN KEY ("processVersionId") REFERENCES "process_versions" ("id") ON DELETE RESTRICT ON UPDATE NO ACTION)`,
     );
-    await queryRunner.query(`CREATE INDEX "IDX_revisions_project" ON "revisions" ("projectId")`);
-    await queryRunner.query(`CREATE UNIQUE INDEX "IDX_revisions_sheet_number" ON "revisions" ("sheetId", "number")`);
-    await queryRunner.query(
+    await execute(queryRunner, `CREATE INDEX "IDX_revisions_project" ON "revisions" ("projectId")`);
+    await execute(queryRunner, `CREATE UNIQUE INDEX "IDX_revisions_sheet_number" ON "revisions" ("sheetId", "number")`);
+    await execute(queryRunner,
       `CREATE TABLE "revision_devices" ("id" varchar PRIMARY KEY NOT NULL, "revisionId" varchar NOT NULL, "deviceId" varchar NOT NULL, "position" integer NOT NULL, "name" varchar(50) NOT NULL, "targets" text NOT NULL, "result" text, "error" text, "engineVersion" varchar(50) NOT NULL, "processVersionId" varchar NOT NULL, "computedAt" varchar(30) NOT NULL, CONSTRAINT "FK_revision_devices_revision" FOREIGN KEY ("revisionId") REFERENCES "revisions" ("id") ON DELETE RESTRICT ON UPDATE NO ACTION, CONSTRAINT "FK_revision_devices_processVersion" FOREIGN KEY ("processVersionId") REFERENCES "process_versions" ("id") ON DELETE RESTRICT ON UPDATE NO ACTION)`,
     );
-    await queryRunner.query(`CREATE UNIQUE INDEX "IDX_revision_devices_revision_position" ON "revision_devices" ("revisionId", "position")`);
+    await execute(queryRunner, `CREATE UNIQUE INDEX "IDX_revision_devices_revision_position" ON "revision_devices" ("revisionId", "position")`);
     for (const table of ['revisions', 'revision_devices']) {
-      await queryRunner.query(`CREATE TRIGGER "TRG_${table}_no_update" BEFORE UPDATE ON "${table}" BEGIN SELECT RAISE(ABORT, 'revisions are immutable'); END`);
-      await queryRunner.query(`CREATE TRIGGER "TRG_${table}_no_delete" BEFORE DELETE ON "${table}" BEGIN SELECT RAISE(ABORT, 'revisions are immutable'); END`);
+      await createRefusingTrigger(queryRunner, { name: `TRG_${table}_no_update`, table, event: 'UPDATE', message: 'revisions are immutable' });
+      await createRefusingTrigger(queryRunner, { name: `TRG_${table}_no_delete`, table, event: 'DELETE', message: 'revisions are immutable' });
     }
   }
 
   async down(queryRunner: QueryRunner): Promise<void> {
     for (const table of ['revision_devices', 'revisions']) {
-      await queryRunner.query(`DROP TRIGGER "TRG_${table}_no_delete"`);
-      await queryRunner.query(`DROP TRIGGER "TRG_${table}_no_update"`);
+      await dropTrigger(queryRunner, `TRG_${table}_no_delete`, table);
+      await dropTrigger(queryRunner, `TRG_${table}_no_update`, table);
     }
-    await queryRunner.query(`DROP INDEX "IDX_revision_devices_revision_position"`);
-    await queryRunner.query(`DROP TABLE "revision_devices"`);
-    await queryRunner.query(`DROP INDEX "IDX_revisions_sheet_number"`);
-    await queryRunner.query(`DROP INDEX "IDX_revisions_project"`);
-    await queryRunner.query(`DROP TABLE "revisions"`);
+    await execute(queryRunner, `DROP INDEX "IDX_revision_devices_revision_position"`);
+    await execute(queryRunner, `DROP TABLE "revision_devices"`);
+    await execute(queryRunner, `DROP INDEX "IDX_revisions_sheet_number"`);
+    await execute(queryRunner, `DROP INDEX "IDX_revisions_project"`);
+    await execute(queryRunner, `DROP TABLE "revisions"`);
   }
 }

@@ -1,4 +1,5 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
+import { execute } from './dialect.js';
 
 /**
  * A sheet's budgets: the off-state leakage budget (current at a temperature, JSON, null without one) and the
@@ -8,12 +9,12 @@ export class SheetBudgets1796700000003 implements MigrationInterface {
   name = 'SheetBudgets1796700000003';
 
   async up(queryRunner: QueryRunner): Promise<void> {
-    await queryRunner.query(`ALTER TABLE "sheets" ADD COLUMN "leakageBudget" text`);
-    await queryRunner.query(`ALTER TABLE "sheets" ADD COLUMN "offsetBudgets" text NOT NULL DEFAULT ('[]')`);
+    await execute(queryRunner, `ALTER TABLE "sheets" ADD COLUMN "leakageBudget" text`);
+    await execute(queryRunner, `ALTER TABLE "sheets" ADD COLUMN "offsetBudgets" text NOT NULL DEFAULT ('[]')`);
   }
 
   async down(queryRunner: QueryRunner): Promise<void> {
-    await queryRunner.query(`ALTER TABLE "sheets" DROP COLUMN "offsetBudgets"`);
-    await queryRunner.query(`ALTER TABLE "sheets" DROP COLUMN "leakageBudget"`);
+    await execute(queryRunner, `ALTER TABLE "sheets" DROP COLUMN "offsetBudgets"`);
+    await execute(queryRunner, `ALTER TABLE "sheets" DROP COLUMN "leakageBudget"`);
   }
 }

@@ -1,4 +1,5 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
+import { createRefusingTrigger, dropTrigger, execute } from './dialect.js';
 
 /**
  * The parameter convention of each process version: every version written before engine 2.0 gets 1 (kp read
@@ -9,18 +10,14 @@ export class ParameterConvention1796800000000 implements MigrationInterface {
   name = 'ParameterConvention1796800000000';
 
   async up(queryRunner: QueryRunner): Promise<void> {
-    await queryRunner.query(`ALTER TABLE "process_versions" ADD COLUMN "parameterConvention" integer NOT NULL DEFAULT (1)`);
-    await queryRunner.query(`DROP TRIGGER "TRG_process_versions_immutable"`);
-    await queryRunner.query(
-      `CREATE TRIGGER "TRG_process_versions_immutable" BEFORE UPDATE OF "id", "profileId", "number", "schemaVersion", "definition", "message", "createdAt", "modelCard", "modelCardSha256", "modelCardMapping", "parameterConvention" ON "process_versions" BEGIN SELECT RAISE(ABORT, 'process versions are immutable'); END`,
-    );
+    await execute(queryRunner, `ALTER TABLE "process_versions" ADD COLUMN "parameterConvention" integer NOT NULL DEFAULT (1)`);
+    await dropTrigger(queryRunner, 'TRG_process_versions_immutable', 'process_versions');
+    await createRefusingTrigger(queryRunner, { name: 'TRG_process_versions_immutable', table: 'process_versions', event: 'UPDATE', columns: ['id', 'profileId', 'number', 'schemaVersion', 'definition', 'message', 'createdAt', 'modelCard', 'modelCardSha256', 'modelCardMapping', 'parameterConvention'], message: 'process versions are immutable' });
   }
 
   async down(queryRunner: QueryRunner): Promise<void> {
-    await queryRunner.query(`DROP TRIGGER "TRG_process_versions_immutable"`);
-    await queryRunner.query(
-      `CREATE TRIGGER "TRG_process_versions_immutable" BEFORE UPDATE OF "id", "profileId", "number", "schemaVersion", "definition", "message", "createdAt", "modelCard", "modelCardSha256", "modelCardMapping" ON "process_versions" BEGIN SELECT RAISE(ABORT, 'process versions are immutable'); END`,
-    );
-    await queryRunner.query(`ALTER TABLE "process_versions" DROP COLUMN "parameterConvention"`);
+    await dropTrigger(queryRunner, 'TRG_process_versions_immutable', 'process_versions');
+    await createRefusingTrigger(queryRunner, { name: 'TRG_process_versions_immutable', table: 'process_versions', event: 'UPDATE', columns: ['id', 'profileId', 'number', 'schemaVersion', 'definition', 'message', 'createdAt', 'modelCard', 'modelCardSha256', 'modelCardMapping'], message: 'process versions are immutable' });
+    await execute(queryRunner, `ALTER TABLE "process_versions" DROP COLUMN "parameterConvention"`);
   }
 }

@@ -2,6 +2,8 @@ import type { ExtractionResultResponse } from '@channelwright/shared/schemas';
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import type { Repository } from 'typeorm';
+import { rowLock } from '../../database/database-engine.js';
+import { UnitOfWork } from '../../database/unit-of-work.js';
 import { ExtractionEntity } from '../extraction.entity.js';
 
 /** Why a fit ended without a result. */
@@ -17,15 +19,24 @@ export interface JobEnd {
  */
 @Injectable()
 export class ExtractionJobStore {
-  constructor(@InjectRepository(ExtractionEntity) private readonly rows: Repository<ExtractionEntity>) {}
+  constructor(
+    @InjectRepository(ExtractionEntity) private readonly rows: Repository<ExtractionEntity>,
+    private readonly unitOfWork: UnitOfWork,
+  ) {}
 
-  /** Takes the oldest queued job: running, one more attempt; its id, or null when none waits. */
-  async claimNext(): Promise<string | null> {
-    const next = await this.rows.findOne({ select: { id: true, attempts: true, startedAt: true }, where: { status: 'queued' }, order: { createdAt: 'ASC' } });
-    if (!next) return null;
-    const now = new Date();
-    const claimed = await this.rows.update({ id: next.id, status: 'queued' }, { status: 'running', attempts: next.attempts + 1, startedAt: next.startedAt ?? now, iterations: 0 });
-    return claimed.affected === 1 ? next.id : null;
+  /**
+   * Takes the oldest queued job: running, one more attempt; its id, or null when none waits. On PostgreSQL the row is
+   * locked as it is read and rows being claimed by another connection are passed over (FOR UPDATE SKIP LOCKED).
+   */
+  claimNext(): Promise<string | null> {
+    return this.unitOfWork.run(async (manager) => {
+      const rows = manager.getRepository(ExtractionEntity);
+      const next = await rows.findOne({ select: { id: true, attempts: true, startedAt: true }, where: { status: 'queued' }, order: { createdAt: 'ASC' }, lock: rowLock(manager, { skipLocked: true }) });
+      if (!next) return null;
+      const now = new Date();
+      const claimed = await rows.update({ id: next.id, status: 'queued' }, { status: 'running', attempts: next.attempts + 1, startedAt: next.startedAt ?? now, iterations: 0 });
+      return claimed.affected === 1 ? next.id : null;
+    });
   }
 
   async report(id: string, iterations: number, maxIterations: number): Promise<void> {
