@@ -156,6 +156,12 @@ describe('sweep, layout "columns"', () => {
     expect(columns.series[0].columns.saturated).toContain(true);
   });
 
+  it('answers, and the schema the client reads it with accepts, only the fields asked for', () => {
+    const columns = computeSweep({ ...device, ...request, layout: 'columns' as const, fields: ['w', 'vov'] }, BF180G);
+    expect(Object.keys(columns.series[0].columns).sort()).toEqual(['vgs', 'vov', 'w']);
+    expect(sweepColumnsResponseSchema.safeParse(JSON.parse(JSON.stringify(columns))).success).toBe(true);
+  });
+
   it('is smaller as JSON: about half the bytes of the points layout for every field', () => {
     const points = JSON.stringify(run(request)).length;
     const columns = JSON.stringify(computeSweep({ ...device, ...request, layout: 'columns' as const }, BF180G)).length;

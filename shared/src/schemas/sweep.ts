@@ -134,7 +134,7 @@ export const sweepColumnsSeriesSchema = z.object({
   corner: z.string(),
   temperature: z.number().nullable().describe('°C; null in a temperature sweep'),
   length: z.number().int().describe('Points in the series: the length of every column'),
-  columns: z.record(z.enum(SWEEP_FIELDS), sweepColumnSchema).describe('The swept value under its own name and each field asked for, one array each'),
+  columns: z.partialRecord(z.enum(SWEEP_FIELDS), sweepColumnSchema).describe('The swept value under its own name and each field asked for, one array each'),
   warnings: z.array(warningSchema),
 });
 
