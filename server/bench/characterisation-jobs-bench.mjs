@@ -129,7 +129,7 @@ function perCall(work, count) {
   }
   return times.sort((a, b) => a - b)[2];
 }
-const whole = perCall((i) => computeSize({ polarity: 'nmos', model: 'table', ...targets[i] }, BF180G, source), targets.length);
+const whole = perCall((i) => computeSize({ processId: 'bench', polarity: 'nmos', model: 'table', ...targets[i] }, BF180G, source), targets.length);
 print('computeSize with model "table" in-process (snap, re-solve, every figure, ZTC)', `${round(whole * 1000, 1)} µs`, '');
 const sizing = perCall((i) => sizeFromTable(prepared, targets[i]), targets.length);
 print('sizing from the table by gm/ID, per device (between grid points)', `${round(sizing * 1000, 1)} µs`, '< 50 µs');
