@@ -10,6 +10,7 @@ import { QuantityInput } from '../../../components/quantity-input';
 import { isApiError } from '../../../lib/api-error';
 import { useProcessProfiles } from '../../../lib/processes/process-profiles';
 import { useCreateExtraction } from '../api/create-extraction';
+import { FitModelControl } from './fit-model-control';
 
 interface FormValues {
   processId: string;
@@ -104,19 +105,7 @@ export function CurveUploadForm({ onStarted }: { onStarted: (extraction: Extract
             </Text>
             <SegmentedControl aria-labelledby="extraction-polarity" data={[{ value: 'nmos', label: 'NMOS' }, { value: 'pmos', label: 'PMOS' }]} {...form.getInputProps('polarity')} />
           </Stack>
-          <Stack gap={4}>
-            <Text size="sm" fw={500} id="extraction-model">
-              Model to fit
-            </Text>
-            <SegmentedControl
-              aria-labelledby="extraction-model"
-              data={[
-                { value: 'all-region', label: 'All-region' },
-                { value: 'square-law', label: 'Square law' },
-              ]}
-              {...form.getInputProps('model')}
-            />
-          </Stack>
+          <FitModelControl id="extraction-model" {...form.getInputProps('model')} />
         </SimpleGrid>
         <SimpleGrid cols={{ base: 1, sm: 3 }}>
           <QuantityInput label="W (when the file has no W column)" unit="m" value={form.values.w} onChange={(text) => form.setFieldValue('w', text)} error={form.errors.w} />

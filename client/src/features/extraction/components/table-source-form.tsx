@@ -1,11 +1,12 @@
 import { type CharacterisationTable, type ExtractionFromTableRequestInput, extractionFromTableRequestSchema, type Extraction } from '@channelwright/shared/schemas';
 import { formatQuantity } from '@channelwright/shared/units';
-import { Alert, Button, Chip, Group, Select, SegmentedControl, SimpleGrid, Stack, Text } from '@mantine/core';
+import { Alert, Button, Chip, Group, Select, SimpleGrid, Stack, Text } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { isApiError } from '../../../lib/api-error';
 import { currentTables, useProcessTables } from '../../../lib/characterisation/process-tables';
 import { useProcessProfiles } from '../../../lib/processes/process-profiles';
 import { useCreateExtractionFromTable } from '../api/create-extraction-from-table';
+import { FitModelControl } from './fit-model-control';
 
 const deviceKey = (table: Pick<CharacterisationTable, 'polarity' | 'flavour'>) => `${table.polarity}/${table.flavour ?? ''}`;
 const deviceLabel = (table: CharacterisationTable) => `${table.polarity.toUpperCase()}${table.flavour ? ` ${table.flavour}` : ''} (${table.model})`;
@@ -137,19 +138,7 @@ export function TableSourceForm({ onStarted }: { onStarted: (extraction: Extract
                 </Text>
               )}
             </Stack>
-            <Stack gap={4}>
-              <Text size="sm" fw={500} id="table-model">
-                Model to fit
-              </Text>
-              <SegmentedControl
-                aria-labelledby="table-model"
-                data={[
-                  { value: 'all-region', label: 'All-region' },
-                  { value: 'square-law', label: 'Square law' },
-                ]}
-                {...form.getInputProps('model')}
-              />
-            </Stack>
+            <FitModelControl id="table-model" {...form.getInputProps('model')} />
           </SimpleGrid>
         )}
         {table && (
